@@ -1,0 +1,28 @@
+using CompressionMembers.Resolution;
+using CompressionMembers.Results;
+
+namespace CompressionMembers.Methods.Classical;
+
+/// <summary>What the classical methods share: the concentric-load rule and the closing verdict steps.</summary>
+internal static class ClassicalRules
+{
+    internal static Applicability Concentric(in ResolvedActions a, string method)
+    {
+        if (a.HasEccentricity || a.HasEndMoments)
+            return Applicability.NotApplicable(method switch
+            {
+                "Euler" => "the Euler method covers concentric compression only; use the secant method for an eccentric load.",
+                "Johnson" => "the Johnson method covers concentric compression only; use the secant method for an eccentric load.",
+                _ => "the Perry–Robertson method covers concentric compression (with an initial bow) only; use the secant method for an eccentric load.",
+            });
+        return Applicability.Applicable;
+    }
+
+    internal static void Verdict(CalculationTrace t, double demandN, double capacityN, double u)
+    {
+        t.Add("NEd", "design axial compression", TraceCommon_Input, demandN, StepUnit.Force, "actions");
+        t.Add("u", "utilisation", "NEd / N", u, StepUnit.None, "common practice");
+    }
+
+    private const string TraceCommon_Input = "input";
+}

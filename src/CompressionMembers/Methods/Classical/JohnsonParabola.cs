@@ -1,0 +1,96 @@
+using System;
+using CompressionMembers.Internal;
+using CompressionMembers.Methods.Common;
+using CompressionMembers.Resolution;
+using CompressionMembers.Results;
+
+namespace CompressionMembers.Methods.Classical;
+
+/// <summary>
+/// The Johnson parabola for intermediate columns with the Euler hyperbola beyond the transition slenderness:
+/// σcr = f − (f / 2π)² λ² / E for λ &lt; Cc = √(2π² E / f), σcr = π² E / λ² for λ ≥ Cc. The two curves meet at
+/// λ = Cc with equal value (f/2) and equal slope. The capacity is nominal (no partial factor).
+/// </summary>
+/// <remarks>
+/// Source: J. B. Johnson (1893); Shigley's Mechanical Engineering Design, section on columns (the parabolic
+/// formula), and the same formula in the classical aluminium and steel column literature. Concentric compression only.
+/// Thread safety: immutable.
+/// </remarks>
+[Immutable]
+public sealed class JohnsonParabola : IResistanceMethod
+{
+    private const string Ref = "Johnson parabola (Shigley, columns)";
+
+    /// <inheritdoc/>
+    public MethodIdentity Identity { get; } = new("Johnson parabola with Euler hyperbola", "Johnson column formula (Shigley's Mechanical Engineering Design)", "", "columns, parabolic formula");
+
+    /// <inheritdoc/>
+    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) => ClassicalRules.Concentric(actions, "Johnson");
+
+    /// <summary>Transition slenderness Cc = √(2π² E / f).</summary>
+    internal static double TransitionSlenderness(double ePa, double fPa) => Math.Sqrt(2 * Math.PI * Math.PI * ePa / fPa);
+
+    /// <summary>Critical stress by Johnson below Cc and Euler above.</summary>
+    internal static double CriticalStress(double lambda, double ePa, double fPa, out bool johnson)
+    {
+        double cc = TransitionSlenderness(ePa, fPa);
+        johnson = lambda < cc;
+        if (johnson)
+        {
+            double k = fPa * lambda / (2 * Math.PI);
+            return fPa - k * k / ePa;
+        }
+        return Math.PI * Math.PI * ePa / (lambda * lambda);
+    }
+
+    /// <inheritdoc/>
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        var y = new AxisData(member, BucklingAxis.Y);
+        var z = new AxisData(member, BucklingAxis.Z);
+        double e = member.ElasticModulusPa, f = member.StrengthPa, a = member.AreaM2;
+        double cc = TransitionSlenderness(e, f);
+        double sy = CriticalStress(y.Slenderness, e, f, out bool jy);
+        double sz = CriticalStress(z.Slenderness, e, f, out bool jz);
+        if (trace is not null)
+        {
+            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Member.Material.Source);
+            TraceCommon.SectionAndLengths(trace, member);
+            trace.Add("Cc", "transition slenderness", "√(2 π² E / f)", cc, StepUnit.None, Ref);
+            AxisSteps(trace, y, jy, sy, a);
+            AxisSteps(trace, z, jz, sz, a);
+        }
+        bool govY = sy <= sz;
+        double capacity = Math.Min(sy, sz) * a;
+        bool johnson = govY ? jy : jz;
+        double u = actions.AxialForceN / capacity;
+        if (trace is not null)
+        {
+            trace.Add("N", "nominal capacity", "min(Ny, Nz)", capacity, StepUnit.Force, Ref);
+            ClassicalRules.Verdict(trace, actions.AxialForceN, capacity, u);
+        }
+        return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z, FailureMode.FlexuralBuckling,
+            johnson ? "Johnson parabola (λ < Cc)" : "Euler hyperbola (λ ≥ Cc)",
+            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.Slenderness / cc, y.CriticalForceN, sy / f, sy * a),
+            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.Slenderness / cc, z.CriticalForceN, sz / f, sz * a),
+            default, trace);
+    }
+
+    private static void AxisSteps(CalculationTrace t, in AxisData ax, bool johnson, double sigma, double a)
+    {
+        TraceCommon.Slenderness(t, ax, Ref);
+        string s = ax.Sub;
+        if (johnson)
+        {
+            t.Note($"λ{s} < Cc: the Johnson parabola governs about {s}.", Ref);
+            t.Add("σcr," + s, "critical stress about " + s, $"f − (f λ{s} / 2π)² / E", sigma, StepUnit.Stress, Ref);
+        }
+        else
+        {
+            t.Note($"λ{s} ≥ Cc: the Euler hyperbola governs about {s}.", Ref);
+            t.Add("σcr," + s, "critical stress about " + s, $"π² E / λ{s}²", sigma, StepUnit.Stress, Ref);
+        }
+        t.Add("N" + s, "nominal capacity about " + s, $"σcr,{s} A", sigma * a, StepUnit.Force, Ref);
+    }
+}

@@ -1,0 +1,105 @@
+using System;
+using CompressionMembers.Internal;
+using CompressionMembers.Methods.Common;
+using CompressionMembers.Resolution;
+using CompressionMembers.Results;
+
+namespace CompressionMembers.Methods.Classical;
+
+/// <summary>
+/// The Perry–Robertson formula: the mean stress at which the extreme fibre of a column with an initial bow reaches
+/// the compressive strength, σc = ½[f + (1 + η) σE] − √(¼[f + (1 + η) σE]² − f σE), σE = π² E / λ².
+/// With η = 0 it gives min(f, σE); the European column curves are this formula in normalised form with
+/// η = α (λ̄ − 0.2). The capacity is nominal (no partial factor).
+/// </summary>
+/// <remarks>
+/// Source: J. Perry (1886), A. Robertson (1925); the derivation in Timoshenko &amp; Gere §1.12 (initially curved bars)
+/// and Trahair &amp; Bradford, The Behaviour and Design of Steel Structures, chapter on compression members.
+/// Concentric compression (with imperfection) only. Thread safety: immutable.
+/// </remarks>
+[Immutable]
+public sealed class PerryRobertson : IResistanceMethod
+{
+    private const string Ref = "Perry–Robertson (Timoshenko & Gere §1.12)";
+
+    /// <summary>Creates the method with an imperfection model.</summary>
+    /// <param name="imperfection">How η is set.</param>
+    /// <exception cref="ArgumentNullException"><paramref name="imperfection"/> is null.</exception>
+    public PerryRobertson(PerryImperfection imperfection)
+    {
+        Imperfection = Guard.NotNull(imperfection, nameof(imperfection));
+        Identity = new MethodIdentity("Perry–Robertson formula", "Perry–Robertson (Timoshenko & Gere; Trahair & Bradford)", "", "initially curved struts",
+            new MethodSetting("η", "imperfection model: " + imperfection.Description, imperfection.Value, StepUnit.None, false, imperfection.Kind.ToString()));
+    }
+
+    /// <summary>The imperfection model.</summary>
+    public PerryImperfection Imperfection { get; }
+
+    /// <inheritdoc/>
+    public MethodIdentity Identity { get; }
+
+    /// <inheritdoc/>
+    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) => ClassicalRules.Concentric(actions, "Perry");
+
+    /// <summary>The Perry–Robertson mean stress at failure.</summary>
+    internal static double CriticalStress(double fPa, double sigmaEPa, double eta)
+    {
+        double p = 0.5 * (fPa + (1 + eta) * sigmaEPa);
+        double disc = p * p - fPa * sigmaEPa;
+        // disc ≥ ((f − σE)/2)² ≥ 0 for η ≥ 0; the max guards against a rounding just below zero.
+        return p - Math.Sqrt(Math.Max(disc, 0));
+    }
+
+    private double Eta(in AxisData ax, in ResolvedActions actions) => Imperfection.Kind switch
+    {
+        PerryImperfection.Model.Constant => Imperfection.Value,
+        PerryImperfection.Model.Robertson => Imperfection.Value * ax.Slenderness,
+        PerryImperfection.Model.BowRatio => ax.EffectiveLengthM / Imperfection.Value * ax.FibreMaxM / (ax.RadiusM * ax.RadiusM),
+        _ => (ax.Axis == BucklingAxis.Y ? actions.InitialBowYM : actions.InitialBowZM) * ax.FibreMaxM / (ax.RadiusM * ax.RadiusM),
+    };
+
+    /// <inheritdoc/>
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        var y = new AxisData(member, BucklingAxis.Y);
+        var z = new AxisData(member, BucklingAxis.Z);
+        double e = member.ElasticModulusPa, f = member.StrengthPa, a = member.AreaM2;
+        double etaY = Eta(y, actions), etaZ = Eta(z, actions);
+        double seY = Math.PI * Math.PI * e / (y.Slenderness * y.Slenderness);
+        double seZ = Math.PI * Math.PI * e / (z.Slenderness * z.Slenderness);
+        double sY = CriticalStress(f, seY, etaY), sZ = CriticalStress(f, seZ, etaZ);
+        if (trace is not null)
+        {
+            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Member.Material.Source);
+            TraceCommon.SectionAndLengths(trace, member);
+            trace.Note("Imperfection: " + Imperfection.Description + ".", Ref);
+            AxisSteps(trace, y, etaY, seY, sY, a);
+            AxisSteps(trace, z, etaZ, seZ, sZ, a);
+        }
+        bool govY = sY <= sZ;
+        double capacity = Math.Min(sY, sZ) * a;
+        double u = actions.AxialForceN / capacity;
+        if (trace is not null)
+        {
+            trace.Add("N", "nominal capacity", "min(Ny, Nz)", capacity, StepUnit.Force, Ref);
+            ClassicalRules.Verdict(trace, actions.AxialForceN, capacity, u);
+        }
+        return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z, FailureMode.FlexuralBuckling,
+            "Perry–Robertson: extreme fibre of the bowed strut reaches f",
+            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, Math.Sqrt(f / seY), y.CriticalForceN, sY / f, sY * a),
+            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, Math.Sqrt(f / seZ), z.CriticalForceN, sZ / f, sZ * a),
+            default, trace);
+    }
+
+    private static void AxisSteps(CalculationTrace t, in AxisData ax, double eta, double sigmaE, double sigma, double a)
+    {
+        string s = ax.Sub;
+        TraceCommon.Slenderness(t, ax, Ref);
+        t.Add("σE," + s, "Euler stress about " + s, $"π² E / λ{s}²", sigmaE, StepUnit.Stress, Ref);
+        t.Add("η" + s, "imperfection parameter about " + s, "e0 c / i²", eta, StepUnit.None, Ref);
+        t.Add("σc," + s, "Perry–Robertson failure stress about " + s,
+            $"½[f + (1 + η{s}) σE,{s}] − √(¼[f + (1 + η{s}) σE,{s}]² − f σE,{s})", sigma, StepUnit.Stress, Ref);
+        t.Add("N" + s, "nominal capacity about " + s, $"σc,{s} A", sigma * a, StepUnit.Force, Ref);
+    }
+}

@@ -1,0 +1,33 @@
+using System;
+using CompressionMembers.Resolution;
+using CompressionMembers.Results;
+
+namespace CompressionMembers.Methods.Common;
+
+/// <summary>The per-axis values every flexural method starts from, in SI doubles.</summary>
+internal readonly struct AxisData
+{
+    internal AxisData(in ResolvedMember m, BucklingAxis axis)
+    {
+        Axis = axis;
+        bool y = axis == BucklingAxis.Y;
+        SecondMomentM4 = y ? m.SecondMomentYM4 : m.SecondMomentZM4;
+        EffectiveLengthM = y ? m.EffectiveLengthYM : m.EffectiveLengthZM;
+        RadiusM = Math.Sqrt(SecondMomentM4 / m.AreaM2);
+        Slenderness = EffectiveLengthM / RadiusM;
+        CriticalForceN = Math.PI * Math.PI * m.ElasticModulusPa * SecondMomentM4 / (EffectiveLengthM * EffectiveLengthM);
+        FibrePositiveM = y ? m.FibrePositiveZM : m.FibrePositiveYM;
+        FibreNegativeM = y ? m.FibreNegativeZM : m.FibreNegativeYM;
+    }
+
+    internal BucklingAxis Axis { get; }
+    internal double SecondMomentM4 { get; }
+    internal double EffectiveLengthM { get; }
+    internal double RadiusM { get; }
+    internal double Slenderness { get; }
+    internal double CriticalForceN { get; }
+    internal double FibrePositiveM { get; }
+    internal double FibreNegativeM { get; }
+    internal double FibreMaxM => Math.Max(FibrePositiveM, FibreNegativeM);
+    internal string Sub => Axis == BucklingAxis.Y ? "y" : "z";
+}

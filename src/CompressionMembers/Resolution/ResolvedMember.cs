@@ -1,0 +1,114 @@
+using System;
+using CompressionMembers.Internal;
+using CompressionMembers.Materials;
+using CompressionMembers.Members;
+using CompressionMembers.Sections;
+
+namespace CompressionMembers.Resolution;
+
+/// <summary>
+/// A member resolved once into SI doubles (N, m, Pa): what a method kernel reads. Below this line no quantity type
+/// is used; above it, no bare double.
+/// </summary>
+/// <remarks>
+/// <para>Names carry their unit: <c>AreaM2</c>, <c>SecondMomentYM4</c>, <c>ElasticModulusPa</c>. Axes y and z are the
+/// principal axes of the section (see <see cref="Section"/>).</para>
+/// <para>The default value has a null <see cref="Member"/> and zeros everywhere; methods reject it. Use
+/// <see cref="From"/>. Thread safety: immutable value type.</para>
+/// </remarks>
+[Immutable]
+public readonly struct ResolvedMember
+{
+    private ResolvedMember(Member member)
+    {
+        Member = member;
+        var m = member.Material;
+        var p = member.Section.Props;
+        MaterialKind = m.Kind;
+        SectionKind = member.Section.Kind;
+        ElasticModulusPa = m.ElasticModulus.Pascals;
+        ShearModulusPa = m.ShearModulus.Pascals;
+        StrengthPa = m.CompressiveStrength.Pascals;
+        DensityKgM3 = m.Density.KilogramsPerCubicMeter;
+        AreaM2 = p.AreaM2;
+        SecondMomentYM4 = p.IyM4;
+        SecondMomentZM4 = p.IzM4;
+        FibrePositiveZM = p.FibrePositiveZM;
+        FibreNegativeZM = p.FibreNegativeZM;
+        FibrePositiveYM = p.FibrePositiveYM;
+        FibreNegativeYM = p.FibreNegativeYM;
+        TorsionConstantM4 = p.TorsionConstantM4;
+        WarpingConstantM6 = p.WarpingConstantM6;
+        ShearCentreYM = p.ShearCentreYM;
+        ShearCentreZM = p.ShearCentreZM;
+        LengthM = member.Length.Meters;
+        EffectiveLengthYM = member.EffectiveLengthYM;
+        EffectiveLengthZM = member.EffectiveLengthZM;
+        EffectiveLengthTorsionalM = member.EffectiveLengthTorsionalM;
+    }
+
+    /// <summary>Resolves a member to SI doubles.</summary>
+    /// <param name="member">The member.</param>
+    /// <returns>The resolved member.</returns>
+    /// <exception cref="ArgumentNullException"><paramref name="member"/> is null.</exception>
+    public static ResolvedMember From(Member member)
+    {
+        ArgumentNullException.ThrowIfNull(member);
+        return new ResolvedMember(member);
+    }
+
+    /// <summary>The member this was resolved from (families read their own values from its material and section).</summary>
+    public Member Member { get; }
+    /// <summary>Material family.</summary>
+    public MaterialKind MaterialKind { get; }
+    /// <summary>Section family.</summary>
+    public SectionKind SectionKind { get; }
+    /// <summary>Elastic modulus for stability, E, in Pa.</summary>
+    public double ElasticModulusPa { get; }
+    /// <summary>Shear modulus G in Pa.</summary>
+    public double ShearModulusPa { get; }
+    /// <summary>Compressive strength (characteristic, yield or proof) in Pa.</summary>
+    public double StrengthPa { get; }
+    /// <summary>Density in kg/m³.</summary>
+    public double DensityKgM3 { get; }
+    /// <summary>Area in m².</summary>
+    public double AreaM2 { get; }
+    /// <summary>Second moment about the principal axis y, m⁴.</summary>
+    public double SecondMomentYM4 { get; }
+    /// <summary>Second moment about the principal axis z, m⁴.</summary>
+    public double SecondMomentZM4 { get; }
+    /// <summary>Distance from the y axis to the extreme fibre on the +z side, m.</summary>
+    public double FibrePositiveZM { get; }
+    /// <summary>Distance from the y axis to the extreme fibre on the −z side, m (positive).</summary>
+    public double FibreNegativeZM { get; }
+    /// <summary>Distance from the z axis to the extreme fibre on the +y side, m.</summary>
+    public double FibrePositiveYM { get; }
+    /// <summary>Distance from the z axis to the extreme fibre on the −y side, m (positive).</summary>
+    public double FibreNegativeYM { get; }
+    /// <summary>St Venant torsion constant, m⁴ (NaN where unknown).</summary>
+    public double TorsionConstantM4 { get; }
+    /// <summary>Warping constant, m⁶ (NaN where unknown).</summary>
+    public double WarpingConstantM6 { get; }
+    /// <summary>Shear-centre offset from the centroid along y, m (NaN where unknown).</summary>
+    public double ShearCentreYM { get; }
+    /// <summary>Shear-centre offset from the centroid along z, m (NaN where unknown).</summary>
+    public double ShearCentreZM { get; }
+    /// <summary>System length, m.</summary>
+    public double LengthM { get; }
+    /// <summary>Effective length about y, m.</summary>
+    public double EffectiveLengthYM { get; }
+    /// <summary>Effective length about z, m.</summary>
+    public double EffectiveLengthZM { get; }
+    /// <summary>Effective length for torsional buckling, m.</summary>
+    public double EffectiveLengthTorsionalM { get; }
+
+    /// <summary>Radius of gyration about y, m.</summary>
+    public double RadiusYM => Math.Sqrt(SecondMomentYM4 / AreaM2);
+    /// <summary>Radius of gyration about z, m.</summary>
+    public double RadiusZM => Math.Sqrt(SecondMomentZM4 / AreaM2);
+    /// <summary>Whether the torsion constant, warping constant and shear centre are all known.</summary>
+    public bool HasTorsionalProperties => double.IsFinite(TorsionConstantM4) && double.IsFinite(WarpingConstantM6)
+        && double.IsFinite(ShearCentreYM) && double.IsFinite(ShearCentreZM);
+    /// <summary>Whether this value came from <see cref="From"/> (false for <c>default</c>).</summary>
+    public bool IsValid => Member is not null;
+}
