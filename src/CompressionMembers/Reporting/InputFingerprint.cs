@@ -14,7 +14,7 @@ namespace CompressionMembers.Reporting;
 /// calculation, whatever units they were typed in.
 /// </summary>
 /// <remarks>
-/// The canonical form lists every defining value in SI, round-trip formatted, one <c>key=value</c> line each, in a
+/// The canonical form lists every defining value in SI to twelve significant digits, one <c>key=value</c> line each, in a
 /// fixed order (see <see cref="CanonicalText"/>); the fingerprint is the first 16 hexadecimal digits of its SHA-256
 /// hash, prefixed with the form's version "c1-". The library version is deliberately not part of it, so an unchanged
 /// input keeps its fingerprint across releases; a release that changes the canonical form changes the prefix.
