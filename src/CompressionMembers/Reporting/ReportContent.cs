@@ -73,6 +73,8 @@ internal sealed class ReportContent
         c.Outcome.Add(("NRd", NumberFormat.Quantity(r.DesignResistanceN, StepUnit.Force) + " (resistance of the governing check)"));
         c.Outcome.Add(("NEd", NumberFormat.Quantity(a.AxialCompression.Newtons, StepUnit.Force)));
         c.Outcome.Add(("utilisation", NumberFormat.Number(r.Utilisation)));
+        if (s.IsThinWalledOpen && !r.Torsional.IsEvaluated && s.Kind != Sections.SectionKind.DoublySymmetricI)
+            c.Outcome.Add(("not checked", "torsional and flexural-torsional buckling: this section is open and thin-walled, and they can govern; use a method that checks them"));
         c.Verdict = r.Passed
             ? $"PASSES: utilisation {NumberFormat.Number(r.Utilisation)} ≤ 1"
             : $"FAILS: utilisation {NumberFormat.Number(r.Utilisation)} > 1";
