@@ -48,6 +48,26 @@ public static class ColumnCurvePlot
         var plt = Palette.NewPlot($"Column curve: {member.Name} ({member.Section.Designation})",
             "slenderness λ = L_cr / i  (–)", "stress σ = N / A  (MPa)");
 
+        // The method's own curve for this section and material.
+        var ra = ResolvedActions.From(result.Actions);
+        var cx = new List<double>();
+        var cy = new List<double>();
+        for (int k = 1; k <= 120; k++)
+        {
+            double lam = lamMax * k / 120.0;
+            var m = Member.Create(member.Section, member.Material, UnitsNet.Length.FromMeters(lam * iMin), Restraint.PinnedBothAxes, member.Name);
+            var r = ResolvedMember.From(m);
+            if (!result.Method.AppliesTo(r, ra).IsApplicable) continue;
+            cx.Add(lam);
+            cy.Add(Check.Evaluate(r, ra, result.Method, null).DesignResistanceN / a * mpa);
+        }
+        if (cx.Count > 1)
+        {
+            var code = plt.Add.ScatterLine(cx.ToArray(), cy.ToArray(), Palette.Code);
+            code.LegendText = "method: " + result.Method.Identity.Name;
+            code.LineWidth = 3;
+        }
+
         // Euler hyperbola, shown where it is below 1.2 f so that the plot keeps its scale.
         var ex = new List<double>();
         var ey = new List<double>();
@@ -77,26 +97,6 @@ public static class ColumnCurvePlot
         johnson.LegendText = "Johnson  σ = f (1 − f λ²/4π²E)";
         johnson.LineWidth = 2;
         johnson.LinePattern = LinePattern.DenselyDashed;
-
-        // The method's own curve for this section and material.
-        var ra = ResolvedActions.From(result.Actions);
-        var cx = new List<double>();
-        var cy = new List<double>();
-        for (int k = 1; k <= 120; k++)
-        {
-            double lam = lamMax * k / 120.0;
-            var m = Member.Create(member.Section, member.Material, UnitsNet.Length.FromMeters(lam * iMin), Restraint.PinnedBothAxes, member.Name);
-            var r = ResolvedMember.From(m);
-            if (!result.Method.AppliesTo(r, ra).IsApplicable) continue;
-            cx.Add(lam);
-            cy.Add(Check.Evaluate(r, ra, result.Method, null).DesignResistanceN / a * mpa);
-        }
-        if (cx.Count > 1)
-        {
-            var code = plt.Add.ScatterLine(cx.ToArray(), cy.ToArray(), Palette.Code);
-            code.LegendText = "method: " + result.Method.Identity.Name;
-            code.LineWidth = 3;
-        }
 
         var fig = new Figure(plt, width, height);
         double sEd = result.Actions.AxialCompression.Newtons / a * mpa;
