@@ -142,15 +142,19 @@ internal static class ElasticColumnKernel
         double x0 = lo, f0 = f(lo);
         if (f0 == 0 && lo > 0) return lo;
         if (f0 == 0) { x0 = lo + 1e-9 * step; f0 = f(x0); } // u = 0 is a trivial root of a multiplied-out form
+        double scale = Math.Abs(f0);
         for (int i = 1; i <= steps; i++)
         {
             double x1 = i == steps ? hi : lo + i * step;
             double f1 = f(x1);
+            scale = Math.Max(scale, Math.Abs(f1));
             if (f1 == 0) return x1;
             if (f0 != 0 && Math.Sign(f1) != Math.Sign(f0))
                 return Brent.FindRoot(f, x0, x1, 1e-15 * Math.Max(1, x1), 200);
             x0 = x1; f0 = f1;
         }
+        // A root at the end of the bracket (the stiff limit, u = 2π or π) can be hidden by rounding of sin and cos there.
+        if (Math.Abs(f0) <= 1e-12 * scale) return hi;
         return ThrowNoRoot(lo, hi);
     }
 
