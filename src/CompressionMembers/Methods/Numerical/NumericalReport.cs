@@ -8,7 +8,7 @@ namespace CompressionMembers.Methods.Numerical;
 /// <summary>Plain-text reports of the numerical analyses: invariant culture, fixed formats, no timestamps.</summary>
 internal static class NumericalReport
 {
-    internal const string Caution = "Results support, not replace, a licensed engineer; verify against the governing local code, its national annex and the current edition.";
+    internal const string Caution = LibraryInfo.Caution;
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
     internal static string N(double v) => Guard.Show(Math.Abs(v) < 1e-300 ? 0 : v);
@@ -22,6 +22,7 @@ internal static class NumericalReport
         var m = r.Model;
         var sb = new StringBuilder();
         Line(sb, $"Linear buckling analysis by finite elements: {m.Name}");
+        Line(sb, $"CompressionMembers {LibraryInfo.Version}");
         Line(sb, "");
         Line(sb, "Model");
         Line(sb, $"  length L = {Mm(m.LengthM)}; segments from the bottom:");
@@ -67,6 +68,40 @@ internal static class NumericalReport
         Line(sb, "");
         Line(sb, "Sources: Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., ch. 2; consistent geometric stiffness of the beam element (Przemieniecki 1968).");
         Line(sb, "Range: linear elastic, small deflections, no shear deformation, flexural buckling in one plane.");
+        Line(sb, Caution);
+        return sb.ToString();
+    }
+
+    internal static string SecondOrder(SecondOrderResult r)
+    {
+        var sb = new StringBuilder();
+        string ax = r.Axis == Results.BucklingAxis.Y ? "y" : "z";
+        var m = r.Member;
+        Line(sb, $"Second-order (P-δ) elastic analysis about {ax}: {m.Name}");
+        Line(sb, $"CompressionMembers {LibraryInfo.Version}");
+        Line(sb, "");
+        Line(sb, "Member and actions");
+        Line(sb, $"  {m.Material.Name}; {m.Section.Designation}; L = {Mm(m.Length.Meters)}, pinned at both ends about {ax}");
+        Line(sb, $"  A = {N(r.AreaM2 * 1e6)} mm², I{ax} = {N(r.SecondMomentM4 * 1e12)} mm⁴, extreme fibres {N(r.FibrePositiveM * 1e3)} mm (+) and {N(r.FibreNegativeM * 1e3)} mm (−)");
+        Line(sb, $"  design load N = {Kn(r.AtDesignLoad.LoadN)} ({r.Actions.Name})");
+        Line(sb, $"  load-line offset: bottom e = {Mm(r.EccentricityBottomM)}, top e = {Mm(r.EccentricityTopM)} (eccentricity + end moment / N)");
+        Line(sb, $"  initial bow e0 = {Mm(r.BowM)} (half sine, on the unfavourable side)");
+        Line(sb, $"  mesh: {r.ElementCount} Euler–Bernoulli elements");
+        Line(sb, $"  elastic critical load Ncr = {Kn(r.CriticalForceN)} (same mesh); N / Ncr = {F(r.AtDesignLoad.FractionOfCritical, "0.0000")}");
+        Line(sb, "");
+        Line(sb, "Load–deflection path ((K − P Kg) v = P (Kg v0 + m) at each step)");
+        Line(sb, "         P [kN]   P/Ncr    δmax [mm]   Mmax [kN·m]   σmax [MPa]   at [mm]");
+        foreach (var p in r.Path)
+            Line(sb, $"  {F(p.LoadN / 1e3, "0.000"),13}  {F(p.FractionOfCritical, "0.0000"),6}  {F(p.DeflectionM * 1e3, "0.0000"),11}  {F(p.MomentNm / 1e3, "0.0000"),12}  {F(p.StressPa / 1e6, "0.000"),11}  {F(p.StressAtM * 1e3, "0"),8}");
+        var d = r.AtDesignLoad;
+        Line(sb, "");
+        Line(sb, "At the design load");
+        Line(sb, $"  largest additional deflection δmax = {F(d.DeflectionM * 1e3, "0.000")} mm");
+        Line(sb, $"  largest moment Mmax = P (e(x) + v0(x) + v(x)) = {F(d.MomentNm / 1e3, "0.0000")} kN·m");
+        Line(sb, $"  largest compressive stress σmax = P/A + Mmax c / I = {F(d.StressPa / 1e6, "0.000")} MPa at {F(d.StressAtM * 1e3, "0")} mm from the bottom");
+        Line(sb, "");
+        Line(sb, "Sources: Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., §1.3–1.4 and §1.11 (beam-column); equal end offsets reproduce the secant formula.");
+        Line(sb, "Range: linear elastic, small deflections, pinned ends, one plane of bending; stresses above the proportional limit are not valid.");
         Line(sb, Caution);
         return sb.ToString();
     }
