@@ -75,11 +75,10 @@ public static class EffectiveLength
         string kind = bottom.HoldsTranslation && top.HoldsTranslation ? "braced"
             : (bottom.TranslationalNPerM == 0 || top.TranslationalNPerM == 0) ? "sway" : "on lateral springs";
         string how = bottom.IsIdeal && top.IsIdeal
-            ? "ideal ends: theoretical K of the elastic column"
-            : "exact K from the characteristic equation of the elastic column (lowest root, Brent)";
-        string text = $"end springs: bottom {bottom.Description}, top {top.Description} ({kind}), " +
-            $"EI = {(elasticModulus.Pascals * secondMoment.MetersToTheFourth / 1e3).ToString("0.###", Inv)} kN·m², L = {Si.Given(length)}: " +
-            $"{how}, K = {k.ToString("0.0000", Inv)}";
+            ? $"theoretical K = {k.ToString("0.0000", Inv)} of the ideal ends"
+            : $"exact K = {k.ToString("0.0000", Inv)} from the characteristic equation of the elastic column";
+        string text = $"end springs ({kind}): bottom {bottom.Description}; top {top.Description}; " +
+            $"EI = {(elasticModulus.Pascals * secondMoment.MetersToTheFourth / 1e3).ToString("0.###", Inv)} kN·m², L = {Si.Given(length)}: {how}";
         var bc = bottom.AsEndCondition;
         var tc = top.AsEndCondition;
         bool ideal = bc.HasValue && tc.HasValue;

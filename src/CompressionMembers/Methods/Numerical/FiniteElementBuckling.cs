@@ -23,7 +23,7 @@ namespace CompressionMembers.Methods.Numerical;
 [Immutable]
 public sealed class FiniteElementBuckling : IResistanceMethod
 {
-    private const string Ref = "finite-element linear buckling (Euler–Bernoulli elements, consistent geometric stiffness)";
+    private const string Ref = "FE linear buckling (Timoshenko & Gere ch. 2)";
 
     /// <summary>Creates the method with the automatic mesh.</summary>
     public FiniteElementBuckling()
