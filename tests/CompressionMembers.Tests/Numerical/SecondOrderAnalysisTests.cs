@@ -99,6 +99,23 @@ public class SecondOrderAnalysisTests
         Near.Relative(s.Pascals, r.AtDesignLoad.MaximumStress.Pascals, 1e-5, "secant formula about z");
     }
 
+    [Theory]
+    [InlineData(1200, 3.0)]
+    [InlineData(2500, 6.0)]
+    public void Analyse_AtPerryRobertsonCapacity_ExtremeFibreReachesStrength(double lengthMm, double bowMm)
+    {
+        // Perry–Robertson (the library's PerryRobertson with the bow from the actions; Perry 1886, Robertson 1925, as in
+        // Timoshenko & Gere §1.11): its capacity is the load at which the extreme fibre of the half-sine bowed strut reaches f.
+        // The P-δ model at that load must give σmax = f = 250 MPa.
+        var member = Member.Create(Bar, Fixtures.Steel, Length.FromMillimeters(lengthMm), Restraint.PinnedBothAxes, "bowed strut");
+        var probe = DesignActions.Compression(Force.FromKilonewtons(1)).WithInitialBow(null, Length.FromMillimeters(bowMm));
+        var perry = Check.Evaluate(member, probe, CompressionMembers.Methods.ResistanceMethods.PerryRobertson(PerryImperfection.FromActions));
+        Assert.Equal(BucklingAxis.Z, perry.GoverningAxis);
+        var atCapacity = probe.WithAxialCompression(Force.FromNewtons(perry.AboutZ.ResistanceN));
+        var r = SecondOrderAnalysis.Analyse(member, atCapacity, BucklingAxis.Z, steps: 1);
+        Near.Relative(250e6, r.AtDesignLoad.MaximumStress.Pascals, 1e-5, "Perry–Robertson: σmax = f at the capacity");
+    }
+
     [Fact]
     public void Analyse_AboveStatedFraction_ThrowsArgumentOutOfRange()
     {
