@@ -143,19 +143,61 @@ internal static class ElasticColumnKernel
         if (f0 == 0 && lo > 0) return lo;
         if (f0 == 0) { x0 = lo + 1e-9 * step; f0 = f(x0); } // u = 0 is a trivial root of a multiplied-out form
         double scale = Math.Abs(f0);
+        double xPrev = double.NaN, fPrev = double.NaN;
         for (int i = 1; i <= steps; i++)
         {
             double x1 = i == steps ? hi : lo + i * step;
             double f1 = f(x1);
             scale = Math.Max(scale, Math.Abs(f1));
             if (f1 == 0) return x1;
-            if (f0 != 0 && Math.Sign(f1) != Math.Sign(f0))
+            if (Math.Sign(f1) != Math.Sign(f0))
                 return Brent.FindRoot(f, x0, x1, 1e-15 * Math.Max(1, x1), 200);
+            // Two close roots (near-coincident modes of a nearly symmetric column) leave no change of sign on the grid but a
+            // dip of |f| towards zero: look inside it on finer grids before going on, so that the lower mode is never skipped.
+            if (!double.IsNaN(fPrev) && Math.Abs(f0) < Math.Abs(fPrev) && Math.Abs(f0) <= Math.Abs(f1)
+                && TryDip(f, xPrev, x1, 0, scale, out double root))
+                return root;
+            xPrev = x0; fPrev = f0;
             x0 = x1; f0 = f1;
         }
         // A root at the end of the bracket (the stiff limit, u = 2π or π) can be hidden by rounding of sin and cos there.
         if (Math.Abs(f0) <= 1e-12 * scale) return hi;
         return ThrowNoRoot(lo, hi);
+    }
+
+    private static bool TryDip(Func<double, double> f, double lo, double hi, int depth, double scale, out double root)
+    {
+        const int sub = 32;
+        double step = (hi - lo) / sub;
+        double x0 = lo, f0 = f(lo), xPrev = double.NaN, fPrev = double.NaN;
+        for (int i = 1; i <= sub; i++)
+        {
+            double x1 = i == sub ? hi : lo + i * step;
+            double f1 = f(x1);
+            if (f1 == 0) { root = x1; return true; }
+            if (Math.Sign(f1) != Math.Sign(f0)) { root = Brent.FindRoot(f, x0, x1, 1e-15 * Math.Max(1, x1), 200); return true; }
+            if (depth < 4 && !double.IsNaN(fPrev) && Math.Abs(f0) < Math.Abs(fPrev) && Math.Abs(f0) <= Math.Abs(f1)
+                && TryDip(f, xPrev, x1, depth + 1, scale, out root))
+                return true;
+            xPrev = x0; fPrev = f0;
+            x0 = x1; f0 = f1;
+        }
+        if (depth == 0)
+        {
+            // A double root (two modes at exactly the same load) touches zero without crossing it: find the least |f| in
+            // the dip by golden-section search and accept it when it is zero to rounding.
+            double a = lo, b = hi, g = 0.5 * (Math.Sqrt(5) - 1);
+            double c = b - g * (b - a), d = a + g * (b - a), fc = Math.Abs(f(c)), fd = Math.Abs(f(d));
+            for (int it = 0; it < 80 && b - a > 1e-15 * b; it++)
+            {
+                if (fc < fd) { b = d; d = c; fd = fc; c = b - g * (b - a); fc = Math.Abs(f(c)); }
+                else { a = c; c = d; fc = fd; d = a + g * (b - a); fd = Math.Abs(f(d)); }
+            }
+            double xm = fc < fd ? c : d;
+            if (Math.Min(fc, fd) <= 1e-10 * scale) { root = xm; return true; }
+        }
+        root = double.NaN;
+        return false;
     }
 
     private static double ThrowNoRoot(double lo, double hi) =>

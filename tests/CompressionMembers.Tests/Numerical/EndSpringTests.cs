@@ -98,6 +98,43 @@ public class EndSpringTests
         }, iter: 60, seed: "0N0XIzNsQ0O2");
     }
 
+    [Theory]
+    [InlineData(0.0)]      // translational springs only: rigid-body rotation and bending modes cross as Rt grows
+    [InlineData(0.5)]
+    [InlineData(5.0)]
+    public void FromEndSprings_DenseSweepOfEqualLateralSprings_NeverSkipsTheLowestMode(double rotRatio)
+    {
+        // Equal springs at both ends make symmetric and antisymmetric modes cross (a double root of the characteristic
+        // equation, with no change of sign). The lowest mode must still be found: checked against the FE model, which
+        // cannot skip a mode, on a dense sweep of Rt = kt L³ / EI (common practice: Rayleigh–Ritz bounds).
+        for (int i = 0; i <= 120; i++)
+        {
+            double rt = Math.Pow(10, -1 + 4.0 * i / 120);
+            var end = EndSpring.Elastic(RotationalStiffness.FromNewtonMetersPerRadian(rotRatio * EI / L), Trans(rt));
+            double k = K(end, end), kfe = KFe(end, end);
+            Near.Relative(kfe, k, 2e-5, $"FE model, Rt = {rt}");
+        }
+    }
+
+    [Theory]
+    [InlineData(1 - 1e-3)]
+    [InlineData(1 - 1e-6)]
+    [InlineData(1.0)]
+    [InlineData(1 + 1e-6)]
+    [InlineData(1 + 1e-3)]
+    public void FromEndSprings_LateralSpringsAtModeCrossing_FindsTheLowerOfTwoCloseRoots(double factor)
+    {
+        // Equal lateral springs kt at both ends, rotation free: the symmetric mode is the half sine, u = π (the springs do
+        // not move), the antisymmetric one the rigid rotation, u² = Rt / 2 (P θ L = kt θ L² / 2): hand derivation,
+        // confirmed by the FE model. They cross at Rt = 2π², where the characteristic equation has a double root; near it
+        // two roots lie closer than the scan grid and must not both be skipped (that would return a far higher load).
+        double rt = 2 * Math.PI * Math.PI * factor;
+        var end = EndSpring.Translational(Trans(rt));
+        double uLow = Math.Min(Math.PI, Math.Sqrt(rt / 2));
+        // Near a double root the root is only as sharp as √ε (common practice of root finding): 1e-7.
+        Near.Relative(Math.PI / uLow, K(end, end), 1e-7, "lower of u = π and u = √(Rt/2)");
+    }
+
     [Fact]
     public void FromEndSprings_BracedSprings_KBetweenHalfAndOneAndFallsWithStiffness()
     {
