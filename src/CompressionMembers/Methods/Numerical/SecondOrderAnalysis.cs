@@ -2,10 +2,8 @@ using System;
 using CompressionMembers.Actions;
 using CompressionMembers.Internal;
 using CompressionMembers.Members;
-using CompressionMembers.Methods.Common;
 using CompressionMembers.Resolution;
 using CompressionMembers.Results;
-using MathNet.Numerics.LinearAlgebra;
 
 namespace CompressionMembers.Methods.Numerical;
 
