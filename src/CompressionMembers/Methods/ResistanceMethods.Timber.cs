@@ -1,0 +1,23 @@
+using CompressionMembers.Methods.Timber;
+
+namespace CompressionMembers.Methods;
+
+public static partial class ResistanceMethods
+{
+    /// <summary>EN 1995-1-1 timber column in service class 1 with the recommended γM of Table 2.3 and kmod of Table 3.1.</summary>
+    public static Ec5ColumnStability Ec5Column { get; } = new();
+
+    /// <summary>EN 1995-1-1 timber column in service class 2 with the recommended factors.</summary>
+    public static Ec5ColumnStability Ec5ColumnServiceClass2 { get; } = new(ServiceClass.Class2);
+
+    /// <summary>EN 1995-1-1 timber column in service class 3 with the recommended factors.</summary>
+    public static Ec5ColumnStability Ec5ColumnServiceClass3 { get; } = new(ServiceClass.Class3);
+
+    /// <summary>EN 1995-1-1 timber column with a national annex's γM or a fixed kmod.</summary>
+    /// <param name="serviceClass">The service class.</param>
+    /// <param name="materialFactor">γM for every product, or null for Table 2.3.</param>
+    /// <param name="modificationFactor">kmod, or null for Table 3.1.</param>
+    /// <returns>The method.</returns>
+    public static Ec5ColumnStability Ec5ColumnWith(ServiceClass serviceClass, double? materialFactor = null, double? modificationFactor = null) =>
+        new(serviceClass, materialFactor, modificationFactor);
+}
