@@ -20,4 +20,16 @@ public static partial class ResistanceMethods
     /// <returns>The method.</returns>
     public static Ec5ColumnStability Ec5ColumnWith(ServiceClass serviceClass, double? materialFactor = null, double? modificationFactor = null) =>
         new(serviceClass, materialFactor, modificationFactor);
+
+    /// <summary>NDS 2018 wood column, allowable stress design, CD from the load-duration class, no other adjustment.</summary>
+    public static NdsColumnStability NdsColumnAsd { get; } = new(NdsDesignFormat.Asd);
+
+    /// <summary>NDS 2018 wood column, load and resistance factor design, λ from the load-duration class, no other adjustment.</summary>
+    public static NdsColumnStability NdsColumnLrfd { get; } = new(NdsDesignFormat.Lrfd);
+
+    /// <summary>NDS 2018 wood column with adjustment factors of your own.</summary>
+    /// <param name="format">ASD or LRFD.</param>
+    /// <param name="adjustments">The use-dependent factors.</param>
+    /// <returns>The method.</returns>
+    public static NdsColumnStability NdsColumn(NdsDesignFormat format, NdsAdjustments adjustments) => new(format, adjustments);
 }
