@@ -32,4 +32,19 @@ public static partial class ResistanceMethods
     /// <param name="adjustments">The use-dependent factors.</param>
     /// <returns>The method.</returns>
     public static NdsColumnStability NdsColumn(NdsDesignFormat format, NdsAdjustments adjustments) => new(format, adjustments);
+
+    /// <summary>EN 1995-1-2 reduced cross-section, four sides exposed, R30 (γM,fi = 1.0, Table 3.1 charring, Table 2.1 kfi).</summary>
+    public static Ec5FireReducedSection Ec5FireR30 { get; } = new(UnitsNet.Duration.FromMinutes(30));
+
+    /// <summary>EN 1995-1-2 reduced cross-section, four sides exposed, R60.</summary>
+    public static Ec5FireReducedSection Ec5FireR60 { get; } = new(UnitsNet.Duration.FromMinutes(60));
+
+    /// <summary>EN 1995-1-2 reduced cross-section, four sides exposed, R90.</summary>
+    public static Ec5FireReducedSection Ec5FireR90 { get; } = new(UnitsNet.Duration.FromMinutes(90));
+
+    /// <summary>EN 1995-1-2 reduced cross-section for a required time and exposure of your choice.</summary>
+    /// <param name="requiredDuration">Required fire resistance time.</param>
+    /// <param name="exposure">Faces exposed.</param>
+    /// <returns>The method.</returns>
+    public static Ec5FireReducedSection Ec5Fire(UnitsNet.Duration requiredDuration, FireExposure exposure) => new(requiredDuration, exposure);
 }
