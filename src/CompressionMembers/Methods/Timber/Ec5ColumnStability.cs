@@ -63,7 +63,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     {
         var list = new List<MethodSetting>
         {
-            new("SC", "service class", (int)sc + 1, StepUnit.None, true, "EN 1995-1-1 2.3.1.3 (chosen by the designer)"),
+            new("SC", "service class (1, 2 or 3)", (int)sc + 1, StepUnit.None, false, "EN 1995-1-1 2.3.1.3 (chosen by the designer)"),
         };
         if (g is { } gv)
             list.Add(new("γM", "partial factor for material (all products)", gv, StepUnit.None, false, "national-annex or user value, replacing EN 1995-1-1 Table 2.3"));
@@ -75,7 +75,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         }
         if (k is { } kv)
             list.Add(new("kmod", "modification factor (fixed)", kv, StepUnit.None, false, "user value, replacing EN 1995-1-1 Table 3.1"));
-        list.Add(new("kh", "size factor applied", kh ? 1 : 0, StepUnit.Boolean, true, "EN 1995-1-1 3.2(3), 3.3(3), 3.4(3) permit it"));
+        list.Add(new("kh", "size factor applied", kh ? 1 : 0, StepUnit.Boolean, kh, "EN 1995-1-1 3.2(3), 3.3(3), 3.4(3) permit it"));
         list.Add(new("6.3.3", "lateral torsional buckling checked", ltb ? 1 : 0, StepUnit.Boolean, ltb, "EN 1995-1-1 6.3.3"));
         return [.. list];
     }
@@ -111,7 +111,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     }
 
     /// <summary>The size factor kh of EN 1995-1-1 3.2 (3.1), 3.3 (3.2) or 3.4 (3.3) for a depth in bending.</summary>
-    internal static double SizeFactor(TimberMaterial m, bool rectangular, double depthM, out string rule, bool trace)
+    internal static double SizeFactor(TimberMaterial m, bool rectangular, double depthM, out string rule, bool trace, string dim = "h")
     {
         rule = "";
         if (!rectangular) { if (trace) rule = "1 (the size factor is given for rectangular sections)"; return 1.0; }
@@ -119,16 +119,16 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         {
             case TimberProduct.SolidSoftwood or TimberProduct.SolidHardwood:
                 if (m.CharacteristicDensity.KilogramsPerCubicMeter > 700) { if (trace) rule = "1 (ρk > 700 kg/m³)"; return 1.0; }
-                if (depthM >= 0.150) { if (trace) rule = "1 (h ≥ 150 mm)"; return 1.0; }
-                if (trace) rule = "min((150 / h)^0.2, 1.3)";
+                if (depthM >= 0.150) { if (trace) rule = $"1 ({dim} ≥ 150 mm)"; return 1.0; }
+                if (trace) rule = $"min((150 / {dim})^0.2, 1.3)";
                 return Math.Min(Math.Pow(0.150 / depthM, 0.2), 1.3);
             case TimberProduct.GlulamHomogeneous or TimberProduct.GlulamCombined:
-                if (depthM >= 0.600) { if (trace) rule = "1 (h ≥ 600 mm)"; return 1.0; }
-                if (trace) rule = "min((600 / h)^0.1, 1.1)";
+                if (depthM >= 0.600) { if (trace) rule = $"1 ({dim} ≥ 600 mm)"; return 1.0; }
+                if (trace) rule = $"min((600 / {dim})^0.1, 1.1)";
                 return Math.Min(Math.Pow(0.600 / depthM, 0.1), 1.1);
             default:
-                if (depthM >= 0.300) { if (trace) rule = "1 (h ≥ 300 mm)"; return 1.0; }
-                if (trace) rule = "min((300 / h)^s, 1.2)";
+                if (depthM >= 0.300) { if (trace) rule = $"1 ({dim} ≥ 300 mm)"; return 1.0; }
+                if (trace) rule = $"min((300 / {dim})^s, 1.2)";
                 return Math.Min(Math.Pow(0.300 / depthM, m.SizeEffectExponent), 1.2);
         }
     }
@@ -174,7 +174,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.GammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
         string ruleY = "", ruleZ = "";
         i.KhY = ApplySizeFactor ? SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr) : 1.0;
-        i.KhZ = ApplySizeFactor ? SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr) : 1.0;
+        i.KhZ = ApplySizeFactor ? SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b") : 1.0;
         i.NEdN = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions);
         i.MzEdNm = TimberRules.MomentZ(actions);

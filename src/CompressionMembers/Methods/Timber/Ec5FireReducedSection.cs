@@ -77,8 +77,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         ChecksLateralTorsionalBuckling = checkLateralTorsionalBuckling;
         var settings = new List<MethodSetting>
         {
-            new("treq", "required fire resistance time", t, StepUnit.Time, true, "chosen by the designer (R30, R60, R90, …)"),
-            new("sides", "faces exposed to fire", exposure == FireExposure.FourSides ? 4 : 3, StepUnit.None, true, "EN 1995-1-2 4.2.2 (chosen by the designer)"),
+            new("treq", "required fire resistance time", t, StepUnit.Time, false, "chosen by the designer (R30, R60, R90, …)"),
+            new("sides", "faces exposed to fire", exposure == FireExposure.FourSides ? 4 : 3, StepUnit.None, false, "EN 1995-1-2 4.2.2 (chosen by the designer)"),
             new("γM,fi", "partial factor in fire", fireMaterialFactor, StepUnit.None, fireMaterialFactor == 1.0,
                 fireMaterialFactor == 1.0 ? "recommended value of EN 1995-1-2 2.3(1); a national annex may change it" : "national-annex or user value replacing EN 1995-1-2 2.3(1)"),
             new("kmod,fi", "modification factor in fire", 1.0, StepUnit.None, true, "EN 1995-1-2 4.2.2(5)"),

@@ -73,7 +73,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     {
         var s = new List<MethodSetting>
         {
-            new("format", f == NdsDesignFormat.Asd ? "ASD" : "LRFD", (int)f, StepUnit.None, true, "NDS 2018 (chosen by the designer)"),
+            new("format", f == NdsDesignFormat.Asd ? "design format ASD (0 = ASD, 1 = LRFD)" : "design format LRFD (0 = ASD, 1 = LRFD)", (int)f, StepUnit.None, false, "NDS 2018 (chosen by the designer)"),
         };
         if (f == NdsDesignFormat.Asd)
             s.Add(cd is { } c
@@ -91,22 +91,28 @@ public sealed class NdsColumnStability : IResistanceMethod
             s.Add(new("φb", "resistance factor, bending", 0.85, StepUnit.None, true, "NDS Table N2"));
             s.Add(new("φs", "resistance factor, stability", 0.85, StepUnit.None, true, "NDS Table N2"));
         }
-        s.Add(new("CM,c", "wet service factor on Fc", a.WetServiceFc, StepUnit.None, a.WetServiceFc == 1, "NDS 4.3.3 (user)"));
-        s.Add(new("CM,b", "wet service factor on Fb", a.WetServiceFb, StepUnit.None, a.WetServiceFb == 1, "NDS 4.3.3 (user)"));
-        s.Add(new("CM,E", "wet service factor on Emin", a.WetServiceEmin, StepUnit.None, a.WetServiceEmin == 1, "NDS 4.3.3 (user)"));
-        s.Add(new("Ct,c", "temperature factor on Fc", a.TemperatureFc, StepUnit.None, a.TemperatureFc == 1, "NDS 2.3.3 (user)"));
-        s.Add(new("Ct,b", "temperature factor on Fb", a.TemperatureFb, StepUnit.None, a.TemperatureFb == 1, "NDS 2.3.3 (user)"));
-        s.Add(new("Ct,E", "temperature factor on Emin", a.TemperatureEmin, StepUnit.None, a.TemperatureEmin == 1, "NDS 2.3.3 (user)"));
-        s.Add(new("CF,c", "size factor on Fc", a.SizeFc, StepUnit.None, a.SizeFc == 1, "NDS 4.3.6 (user)"));
-        s.Add(new("CF,b", "size factor on Fb", a.SizeFb, StepUnit.None, a.SizeFb == 1, "NDS 4.3.6 (user)"));
-        s.Add(new("Ci,c", "incising factor on Fc", a.IncisingFc, StepUnit.None, a.IncisingFc == 1, "NDS 4.3.8 (user)"));
-        s.Add(new("Ci,b", "incising factor on Fb", a.IncisingFb, StepUnit.None, a.IncisingFb == 1, "NDS 4.3.8 (user)"));
-        s.Add(new("Ci,E", "incising factor on Emin", a.IncisingEmin, StepUnit.None, a.IncisingEmin == 1, "NDS 4.3.8 (user)"));
-        s.Add(new("Cfu", "flat use factor on Fb about z", a.FlatUse, StepUnit.None, a.FlatUse == 1, "NDS 4.3.7 (user)"));
-        s.Add(new("Cr", "repetitive member factor on Fb", a.Repetitive, StepUnit.None, a.Repetitive == 1, "NDS 4.3.9 (user)"));
+        Adj(s, "CM,c", "wet service factor on Fc", a.WetServiceFc, "NDS 4.3.3");
+        Adj(s, "CM,b", "wet service factor on Fb", a.WetServiceFb, "NDS 4.3.3");
+        Adj(s, "CM,E", "wet service factor on Emin", a.WetServiceEmin, "NDS 4.3.3");
+        Adj(s, "Ct,c", "temperature factor on Fc", a.TemperatureFc, "NDS 2.3.3");
+        Adj(s, "Ct,b", "temperature factor on Fb", a.TemperatureFb, "NDS 2.3.3");
+        Adj(s, "Ct,E", "temperature factor on Emin", a.TemperatureEmin, "NDS 2.3.3");
+        Adj(s, "CF,c", "size factor on Fc", a.SizeFc, "NDS 4.3.6");
+        Adj(s, "CF,b", "size factor on Fb", a.SizeFb, "NDS 4.3.6");
+        Adj(s, "Ci,c", "incising factor on Fc", a.IncisingFc, "NDS 4.3.8");
+        Adj(s, "Ci,b", "incising factor on Fb", a.IncisingFb, "NDS 4.3.8");
+        Adj(s, "Ci,E", "incising factor on Emin", a.IncisingEmin, "NDS 4.3.8");
+        Adj(s, "Cfu", "flat use factor on Fb about z", a.FlatUse, "NDS 4.3.7");
+        Adj(s, "Cr", "repetitive member factor on Fb", a.Repetitive, "NDS 4.3.9");
         s.Add(new("(le/d)max", "slenderness limit", construction ? 75 : 50, StepUnit.None, !construction,
             construction ? "NDS 3.7.1.4: 75 allowed during construction only" : "NDS 3.7.1.4"));
         return [.. s];
+    }
+
+    // Only the factors that differ from 1.0 are listed; the trace shows every factor used.
+    private static void Adj(List<MethodSetting> s, string symbol, string meaning, double value, string clause)
+    {
+        if (value != 1.0) s.Add(new(symbol, meaning, value, StepUnit.None, false, clause + " (given by the user)"));
     }
 
     /// <inheritdoc/>
