@@ -5,7 +5,7 @@ namespace CompressionMembers.Internal;
 
 /// <summary>
 /// A canonical, culture-invariant text form of an input, one <c>key=value</c> line each, with every number in SI
-/// written in round-trip form. The input fingerprint is a hash of it, so the same input always gives the same
+/// written to twelve significant digits. The input fingerprint is a hash of it, so the same input always gives the same
 /// fingerprint whatever units it was given in.
 /// </summary>
 internal sealed class CanonicalForm
@@ -14,9 +14,10 @@ internal sealed class CanonicalForm
 
     internal CanonicalForm Add(string key, double siValue)
     {
-        // Normalise -0 to 0 so that a sign of zero never changes a fingerprint.
+        // Twelve significant digits absorb the last-bit noise of unit conversion (25.4 mm per inch, 6894.757 Pa per
+        // psi), so the same member typed in other units gives the same fingerprint; -0 is written as 0.
         if (siValue == 0) siValue = 0;
-        _text.Append(key).Append('=').Append(siValue.ToString("R", CultureInfo.InvariantCulture)).Append('\n');
+        _text.Append(key).Append('=').Append(siValue.ToString("G12", CultureInfo.InvariantCulture)).Append('\n');
         return this;
     }
 

@@ -13,7 +13,15 @@ internal static class Guard
         double.IsNaN(value) ? "NaN" :
         double.IsPositiveInfinity(value) ? "+infinity" :
         double.IsNegativeInfinity(value) ? "-infinity" :
-        value.ToString("G6", Inv);
+        value == 0 || Math.Abs(value) < 1e-4 || Math.Abs(value) >= 1e15 ? value.ToString("G6", Inv) :
+        RoundToSignificant(value, 6).ToString("0.##########", Inv);
+
+    private static double RoundToSignificant(double value, int digits)
+    {
+        int magnitude = (int)Math.Floor(Math.Log10(Math.Abs(value))) + 1;
+        int decimals = Math.Clamp(digits - magnitude, 0, 15);
+        return Math.Round(value, decimals, MidpointRounding.AwayFromZero);
+    }
 
     /// <summary>A value followed by its unit, or the bare value for a dimensionless one.</summary>
     internal static string Show(double value, string unit) =>

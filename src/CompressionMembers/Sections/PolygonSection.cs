@@ -227,10 +227,10 @@ public sealed class PolygonSection : Section
     {
         form.Add("section.kind", Kind.ToString());
         for (int i = 0; i < _outline.Length; i++)
-            form.Add($"section.outline.{i}", $"{_outline[i].Y.Meters:R},{_outline[i].Z.Meters:R}");
+            form.Add($"section.outline.{i}.y", _outline[i].Y.Meters).Add($"section.outline.{i}.z", _outline[i].Z.Meters);
         for (int h = 0; h < _holes.Length; h++)
             for (int i = 0; i < _holes[h].Length; i++)
-                form.Add($"section.hole{h}.{i}", $"{_holes[h][i].Y.Meters:R},{_holes[h][i].Z.Meters:R}");
+                form.Add($"section.hole{h}.{i}.y", _holes[h][i].Y.Meters).Add($"section.hole{h}.{i}.z", _holes[h][i].Z.Meters);
         form.Add("section.It", Props.TorsionConstantM4).Add("section.Iw", Props.WarpingConstantM6)
             .Add("section.scy", Props.ShearCentreYM).Add("section.scz", Props.ShearCentreZM);
     }

@@ -56,8 +56,8 @@ public sealed class EulerBuckling : IResistanceMethod
         return new CheckResult(member, actions, this, capacity, u,
             yields ? BucklingAxis.None : gov.Axis, yields ? FailureMode.Yielding : FailureMode.FlexuralBuckling,
             yields ? "squash load A·f (below the Euler load)" : "Euler critical load",
-            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, double.NaN, y.CriticalForceN, double.NaN, Math.Min(y.CriticalForceN, squash)),
-            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, double.NaN, z.CriticalForceN, double.NaN, Math.Min(z.CriticalForceN, squash)),
+            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), y.CriticalForceN, double.NaN, Math.Min(y.CriticalForceN, squash)),
+            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), z.CriticalForceN, double.NaN, Math.Min(z.CriticalForceN, squash)),
             default, trace);
     }
 }

@@ -72,8 +72,8 @@ public sealed class JohnsonParabola : IResistanceMethod
         }
         return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z, FailureMode.FlexuralBuckling,
             johnson ? "Johnson parabola (λ < Cc)" : "Euler hyperbola (λ ≥ Cc)",
-            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.Slenderness / cc, y.CriticalForceN, sy / f, sy * a),
-            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.Slenderness / cc, z.CriticalForceN, sz / f, sz * a),
+            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(e, f), y.CriticalForceN, sy / f, sy * a),
+            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(e, f), z.CriticalForceN, sz / f, sz * a),
             default, trace);
     }
 

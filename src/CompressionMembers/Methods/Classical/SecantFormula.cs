@@ -164,8 +164,8 @@ public sealed class SecantFormula : IResistanceMethod
             trace.Add("u", "utilisation", "NEd / N", u, StepUnit.None, "common practice");
         }
         return new CheckResult(member, actions, this, capacity, u, axis, mode, check,
-            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, double.NaN, y.CriticalForceN, double.NaN, ey != 0 ? pSecant : y.CriticalForceN),
-            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, double.NaN, z.CriticalForceN, double.NaN, ez != 0 ? pSecant : z.CriticalForceN),
+            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(e, f), y.CriticalForceN, double.NaN, ey != 0 ? pSecant : y.CriticalForceN),
+            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(e, f), z.CriticalForceN, double.NaN, ez != 0 ? pSecant : z.CriticalForceN),
             default, trace);
     }
 }

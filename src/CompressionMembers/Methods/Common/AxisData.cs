@@ -29,5 +29,8 @@ internal readonly struct AxisData
     internal double FibrePositiveM { get; }
     internal double FibreNegativeM { get; }
     internal double FibreMaxM => Math.Max(FibrePositiveM, FibreNegativeM);
+
+    /// <summary>Relative slenderness λ̄ = λ / λ1 with λ1 = π √(E / f), i.e. √(A f / Ncr).</summary>
+    internal double RelativeSlenderness(double ePa, double fPa) => Slenderness / (Math.PI * Math.Sqrt(ePa / fPa));
     internal string Sub => Axis == BucklingAxis.Y ? "y" : "z";
 }

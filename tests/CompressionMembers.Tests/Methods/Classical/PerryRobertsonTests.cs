@@ -1,0 +1,73 @@
+using System;
+using CompressionMembers.Actions;
+using CompressionMembers.Methods;
+using CompressionMembers.Methods.Classical;
+using CompressionMembers.Tests.Support;
+using CsCheck;
+using UnitsNet;
+
+namespace CompressionMembers.Tests.Methods.Classical;
+
+public class PerryRobertsonTests
+{
+    [Theory]
+    [InlineData(250e6, 100e6)]
+    [InlineData(250e6, 400e6)]
+    [InlineData(250e6, 250e6)]
+    public void CriticalStress_ZeroImperfection_IsMinOfStrengthAndEuler(double f, double sigmaE)
+    {
+        // η = 0: the perfect strut fails at min(f, σE) (Timoshenko & Gere §1.12; Trahair & Bradford, compression members).
+        Near.Relative(Math.Min(f, sigmaE), PerryRobertson.CriticalStress(f, sigmaE, 0), 1e-12, "Perry–Robertson with η = 0");
+    }
+
+    [Fact]
+    public void CriticalStress_SatisfiesPerrysEquation()
+    {
+        // Perry's first-yield condition (f − σ)(σE − σ) = η σ σE (Trahair & Bradford; Timoshenko & Gere §1.12), checked on
+        // random inputs: the closed form is its smaller root.
+        Gen.Select(Gen.Double[100e6, 500e6], Gen.Double[10e6, 2000e6], Gen.Double[0, 2]).Sample((f, se, eta) =>
+        {
+            double s = PerryRobertson.CriticalStress(f, se, eta);
+            double lhs = (f - s) * (se - s), rhs = eta * s * se;
+            return Math.Abs(lhs - rhs) <= 1e-6 * f * se && s > 0 && s <= Math.Min(f, se) * (1 + 1e-12);
+        }, seed: "0N0XIzNsQ0O2");
+    }
+
+    [Fact]
+    public void CriticalStress_FallsAsImperfectionGrows()
+    {
+        Gen.Select(Gen.Double[0, 1], Gen.Double[0.001, 1]).Sample((eta, d) =>
+            PerryRobertson.CriticalStress(250e6, 300e6, eta + d) < PerryRobertson.CriticalStress(250e6, 300e6, eta), seed: "0N0XIzNsQ0O2");
+    }
+
+    [Fact]
+    public void Evaluate_Robertson_RecomputesTheFormula()
+    {
+        // η = 0.003 λ (Robertson's constant for BS 449 struts, from memory), 40 × 40 bar, L = 1.2 m, steel.
+        var member = Fixtures.PinnedBar(40, 40, 1200);
+        var r = Check.Evaluate(member, DesignActions.Compression(Force.FromKilonewtons(10)), ResistanceMethods.PerryRobertsonDefault);
+        double i = 0.04 / Math.Sqrt(12), lam = 1.2 / i, se = Math.PI * Math.PI * 200e9 / (lam * lam), eta = 0.003 * lam, f = 250e6;
+        double p = 0.5 * (f + (1 + eta) * se);
+        double expected = (p - Math.Sqrt(p * p - f * se)) * 0.0016;
+        Near.Relative(expected, r.DesignResistanceN, 1e-12, "Perry–Robertson formula, hand evaluation");
+    }
+
+    [Fact]
+    public void Evaluate_BowRatio_MatchesBowFromActions()
+    {
+        // A bow of L/500 given either way gives the same η = e0 c / i² (definition).
+        var member = Fixtures.PinnedBar(40, 40, 1500);
+        var a = DesignActions.Compression(Force.FromKilonewtons(10));
+        var byRatio = Check.Evaluate(member, a, ResistanceMethods.PerryRobertson(PerryImperfection.FromBowRatio(500)));
+        var byActions = Check.Evaluate(member, a.WithInitialBow(Length.FromMillimeters(3), Length.FromMillimeters(3)), ResistanceMethods.PerryRobertson(PerryImperfection.FromActions));
+        Near.Relative(byRatio.DesignResistanceN, byActions.DesignResistanceN, 1e-12, "definition of the bow ratio");
+    }
+
+    [Fact]
+    public void Constant_NegativeEta_Throws()
+    {
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => PerryImperfection.Constant(-0.1));
+        Assert.Equal("eta", ex.ParamName);
+        Assert.StartsWith("Imperfection parameter η must not be negative; got -0.1.", ex.Message);
+    }
+}

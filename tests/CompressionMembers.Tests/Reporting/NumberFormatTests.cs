@@ -1,0 +1,28 @@
+using CompressionMembers.Reporting;
+using CompressionMembers.Results;
+
+namespace CompressionMembers.Tests.Reporting;
+
+public class NumberFormatTests
+{
+    [Theory]
+    [InlineData(0.0, "0")]
+    [InlineData(0.699155, "0.6992")]
+    [InlineData(1.0, "1.000")]
+    [InlineData(245.67, "245.7")]
+    [InlineData(3200.0, "3200")]
+    [InlineData(200000.0, "200 000")]
+    [InlineData(12345678.0, "12.35 × 10⁶")]
+    [InlineData(0.00012345, "123.5 × 10⁻⁶")]
+    [InlineData(-42.42, "−42.42")]
+    [InlineData(double.NaN, "—")]
+    public void Number_FourSignificantFigures(double value, string expected) => Assert.Equal(expected, NumberFormat.Number(value));
+
+    [Theory]
+    [InlineData(91360.0, StepUnit.Force, "91.36 kN")]
+    [InlineData(250e6, StepUnit.Stress, "250.0 MPa")]
+    [InlineData(0.839, StepUnit.Length, "839.0 mm")]
+    [InlineData(475e-6, StepUnit.Area, "475.0 mm²")]
+    [InlineData(1800.0, StepUnit.Time, "30.00 min")]
+    public void Quantity_InDisplayUnits(double si, StepUnit unit, string expected) => Assert.Equal(expected, NumberFormat.Quantity(si, unit));
+}
