@@ -136,7 +136,7 @@ public sealed class AluminiumAlloy : Material
     public bool CoversThickness(Length thickness) => CoversThicknessM(thickness.Meters);
 
     internal bool CoversThicknessM(double tM) =>
-        tM <= MaximumThickness.Meters * (1 + 1e-9) && (MinimumThickness.Meters == 0 ? tM > 0 : tM > MinimumThickness.Meters * (1 - 1e-9));
+        tM <= MaximumThickness.Meters * (1 + 1e-9) && (MinimumThickness.Meters == 0 ? tM > 0 : tM > MinimumThickness.Meters * (1 + 1e-9));
 
     /// <inheritdoc/>
     public override MaterialKind Kind => MaterialKind.Aluminium;

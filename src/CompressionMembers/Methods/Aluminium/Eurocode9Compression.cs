@@ -78,13 +78,16 @@ public sealed class Eurocode9Compression : IResistanceMethod
         Welding = welding ?? AluminiumWelding.None;
         PartialFactorM1 = partialFactorM1;
         PartialFactorM2 = partialFactorM2;
-        Identity = new MethodIdentity("EN 1999-1-1 aluminium member in compression", Std, "2007+A1:2009", "6.1.4–6.1.6, 6.2.4, 6.3.1, 6.3.3",
-            new MethodSetting("γM1", "partial factor for resistance to instability", partialFactorM1, StepUnit.None,
-                partialFactorM1 == RecommendedPartialFactorM1, "recommended value of EN 1999-1-1 6.1.3; a national annex may change it"),
-            new MethodSetting("γM2", "partial factor for the net section at welds", partialFactorM2, StepUnit.None,
-                partialFactorM2 == RecommendedPartialFactorM2, "recommended value of EN 1999-1-1 6.1.3; a national annex may change it"),
-            new MethodSetting("Ahaz", "heat-affected area of longitudinal welds", Welding.HeatAffectedAreaM2, StepUnit.Area, true,
-                "welding: " + Welding.Description));
+        var m1 = new MethodSetting("γM1", "partial factor for resistance to instability", partialFactorM1, StepUnit.None,
+                partialFactorM1 == RecommendedPartialFactorM1, "recommended value of EN 1999-1-1 6.1.3; a national annex may change it");
+        var m2 = new MethodSetting("γM2", "partial factor for the net section at welds", partialFactorM2, StepUnit.None,
+                partialFactorM2 == RecommendedPartialFactorM2, "recommended value of EN 1999-1-1 6.1.3; a national annex may change it");
+        const string name = "EN 1999-1-1 aluminium member in compression", clause = "6.1.4–6.1.6, 6.2.4, 6.3.1, 6.3.3";
+        Identity = Welding.IsWelded
+            ? new MethodIdentity(name, Std, "2007+A1:2009", clause, m1, m2,
+                new MethodSetting("weld", "welding of the member (" + Welding.Description + ")", Welding.HeatAffectedAreaM2, StepUnit.Area, false,
+                    "member-specific; Ahaz of longitudinal welds (0 for welds at the ends only)"))
+            : new MethodIdentity(name, Std, "2007+A1:2009", clause, m1, m2);
     }
 
     /// <summary>How the member is welded.</summary>

@@ -18,7 +18,7 @@ internal static class FtCubic
         var s = t_state ??= new State();
         s.Set(ny, nz, nt, i02, y0, z0, hi);
         var f = t_function ??= s.Residual;
-        if (f(1.0) >= 0) return hi; // the cubic is already non-negative at the bracket end (coincident roots)
+        if (f(1.0) <= 0) return hi; // a root at the bracket end itself (coincident loads)
         return hi * Brent.FindRoot(f, 0, 1.0, 1e-13, 200);
     }
 
