@@ -105,6 +105,7 @@ public sealed class TangentModulusColumn : IResistanceMethod
         var s = t_state ??= new State();
         s.Set(se, e, f0, n);
         var f = t_function ??= s.Residual;
+        if (f(1.0) <= 0) return se; // Et = E to double precision: the Euler stress itself
         return se * Brent.FindRoot(f, 1e-12, 1.0, 1e-13, 300);
     }
 
