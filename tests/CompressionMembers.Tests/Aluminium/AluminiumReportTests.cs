@@ -44,4 +44,30 @@ public class AluminiumReportTests
     [Fact]
     public void Text_TangentModulus_RambergOsgood() =>
         Approvals.Verify(TextReport.Render(Check.EvaluateWithTrace(Pinned(Rhs100x5, A6082T6, 1500, "tube strut"), Kn(100), ResistanceMethods.TangentModulusRambergOsgood)));
+
+    [Fact]
+    public void Markdown_EveryAluminiumMethod_RendersWithTheGoverningCheck()
+    {
+        IResistanceMethod[] methods =
+        [
+            ResistanceMethods.Eurocode9, ResistanceMethods.Eurocode9With(AluminiumWelding.AtEnds(WeldingProcess.Tig)),
+            ResistanceMethods.AluminiumBucklingConstantsAsd, ResistanceMethods.TangentModulusRambergOsgood,
+        ];
+        foreach (var m in methods)
+        {
+            var r = Check.EvaluateWithTrace(Pinned(Rhs100x5, A6082T6, 2000, "tube strut"), Kn(50), m);
+            string md = MarkdownReport.Render(r);
+            Assert.Contains(r.GoverningCheck, md);
+            Assert.Contains(m.Identity.Name, md);
+        }
+    }
+
+    [Fact]
+    public void Fingerprint_ChangesWithWelding()
+    {
+        var member = Pinned(Rhs100x5, A6082T6, 2000);
+        string plain = InputFingerprint.Compute(member, Kn(50), ResistanceMethods.Eurocode9);
+        string welded = InputFingerprint.Compute(member, Kn(50), ResistanceMethods.Eurocode9With(AluminiumWelding.AtEnds(WeldingProcess.Mig)));
+        Assert.NotEqual(plain, welded);
+    }
 }
