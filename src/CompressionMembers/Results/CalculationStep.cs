@@ -6,6 +6,7 @@ namespace CompressionMembers.Results;
 /// clause or source it comes from.</summary>
 /// <remarks>The value is stored in SI (see <see cref="StepUnit"/>); renderers convert for display.
 /// Thread safety: immutable reference type.</remarks>
+[CompressionMembers.Internal.Immutable]
 public sealed class CalculationStep : IEquatable<CalculationStep>
 {
     /// <summary>Creates a step.</summary>
