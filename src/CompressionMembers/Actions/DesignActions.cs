@@ -33,7 +33,15 @@ public sealed class DesignActions
         InitialBowY = bowY;
         InitialBowZ = bowZ;
         LoadDuration = duration;
+        InSi = new SiValues(axial.Newtons, ey.Meters, ez.Meters, myTop.NewtonMeters, myBottom.NewtonMeters, mzTop.NewtonMeters, mzBottom.NewtonMeters,
+            bowY?.Meters ?? 0, bowZ?.Meters ?? 0);
     }
+
+    // SI values converted once at construction, so that resolving the actions costs no unit conversion.
+    internal readonly record struct SiValues(double AxialForceN, double EccentricityYM, double EccentricityZM, double EndMomentYTopNm,
+        double EndMomentYBottomNm, double EndMomentZTopNm, double EndMomentZBottomNm, double InitialBowYM, double InitialBowZM);
+
+    internal SiValues InSi { get; }
 
     /// <summary>Concentric design compression only.</summary>
     /// <param name="axialCompression">Design axial compression, N_Ed, greater than 0.</param>

@@ -31,10 +31,10 @@ public abstract class Material
             throw new System.ArgumentException("Material name must not be empty.", nameof(name));
         if (string.IsNullOrWhiteSpace(source))
             throw new System.ArgumentException("Material source must not be empty; say \"user-defined\" for values of your own.", nameof(source));
-        Si.Pascals(elasticModulus, nameof(elasticModulus), "Elastic modulus");
-        Si.Pascals(shearModulus, nameof(shearModulus), "Shear modulus");
-        Si.Pascals(compressiveStrength, nameof(compressiveStrength), "Compressive strength");
-        Si.KilogramsPerCubicMeter(density, nameof(density), "Density");
+        ElasticModulusPa = Si.Pascals(elasticModulus, nameof(elasticModulus), "Elastic modulus");
+        ShearModulusPa = Si.Pascals(shearModulus, nameof(shearModulus), "Shear modulus");
+        CompressiveStrengthPa = Si.Pascals(compressiveStrength, nameof(compressiveStrength), "Compressive strength");
+        DensityKgM3 = Si.KilogramsPerCubicMeter(density, nameof(density), "Density");
         Name = name;
         Source = source;
         ElasticModulus = elasticModulus;
@@ -60,6 +60,12 @@ public abstract class Material
 
     /// <summary>The density, for self-weight and mass-based size selection.</summary>
     public Density Density { get; }
+
+    // SI values converted once at construction, so that resolving a member costs no unit conversion.
+    internal double ElasticModulusPa { get; }
+    internal double ShearModulusPa { get; }
+    internal double CompressiveStrengthPa { get; }
+    internal double DensityKgM3 { get; }
 
     /// <summary>The family this material belongs to.</summary>
     public abstract MaterialKind Kind { get; }

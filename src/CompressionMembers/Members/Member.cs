@@ -24,6 +24,7 @@ public sealed class Member
         Length = length;
         Restraint = restraint;
         double l = Si.Meters(length, nameof(length), "Member length");
+        LengthM = l;
         EffectiveLengthYM = restraint.AboutY.BucklingFactor * restraint.AboutY.LongestSegmentM(l, "y", nameof(restraint));
         EffectiveLengthZM = restraint.AboutZ.BucklingFactor * restraint.AboutZ.LongestSegmentM(l, "z", nameof(restraint));
         EffectiveLengthTorsionalM = restraint.Torsional.BucklingFactor * restraint.Torsional.LongestSegmentM(l, "the member axis (twist)", nameof(restraint));
@@ -62,6 +63,7 @@ public sealed class Member
     /// <summary>The restraint about each axis and against twisting.</summary>
     public Restraint Restraint { get; }
 
+    internal double LengthM { get; }
     internal double EffectiveLengthYM { get; }
     internal double EffectiveLengthZM { get; }
     internal double EffectiveLengthTorsionalM { get; }

@@ -14,17 +14,18 @@ public readonly struct ResolvedActions
     private ResolvedActions(DesignActions a)
     {
         Actions = a;
-        AxialForceN = a.AxialCompression.Newtons;
-        EccentricityYM = a.EccentricityY.Meters;
-        EccentricityZM = a.EccentricityZ.Meters;
-        EndMomentYTopNm = a.EndMomentYTop.NewtonMeters;
-        EndMomentYBottomNm = a.EndMomentYBottom.NewtonMeters;
-        EndMomentZTopNm = a.EndMomentZTop.NewtonMeters;
-        EndMomentZBottomNm = a.EndMomentZBottom.NewtonMeters;
+        var si = a.InSi;
+        AxialForceN = si.AxialForceN;
+        EccentricityYM = si.EccentricityYM;
+        EccentricityZM = si.EccentricityZM;
+        EndMomentYTopNm = si.EndMomentYTopNm;
+        EndMomentYBottomNm = si.EndMomentYBottomNm;
+        EndMomentZTopNm = si.EndMomentZTopNm;
+        EndMomentZBottomNm = si.EndMomentZBottomNm;
         HasInitialBowY = a.InitialBowY is not null;
         HasInitialBowZ = a.InitialBowZ is not null;
-        InitialBowYM = a.InitialBowY?.Meters ?? 0;
-        InitialBowZM = a.InitialBowZ?.Meters ?? 0;
+        InitialBowYM = si.InitialBowYM;
+        InitialBowZM = si.InitialBowZM;
         LoadDuration = a.LoadDuration;
     }
 

@@ -26,10 +26,10 @@ public readonly struct ResolvedMember
         var p = member.Section.Props;
         MaterialKind = m.Kind;
         SectionKind = member.Section.Kind;
-        ElasticModulusPa = m.ElasticModulus.Pascals;
-        ShearModulusPa = m.ShearModulus.Pascals;
-        StrengthPa = m.CompressiveStrength.Pascals;
-        DensityKgM3 = m.Density.KilogramsPerCubicMeter;
+        ElasticModulusPa = m.ElasticModulusPa;
+        ShearModulusPa = m.ShearModulusPa;
+        StrengthPa = m.CompressiveStrengthPa;
+        DensityKgM3 = m.DensityKgM3;
         AreaM2 = p.AreaM2;
         SecondMomentYM4 = p.IyM4;
         SecondMomentZM4 = p.IzM4;
@@ -41,7 +41,7 @@ public readonly struct ResolvedMember
         WarpingConstantM6 = p.WarpingConstantM6;
         ShearCentreYM = p.ShearCentreYM;
         ShearCentreZM = p.ShearCentreZM;
-        LengthM = member.Length.Meters;
+        LengthM = member.LengthM;
         EffectiveLengthYM = member.EffectiveLengthYM;
         EffectiveLengthZM = member.EffectiveLengthZM;
         EffectiveLengthTorsionalM = member.EffectiveLengthTorsionalM;
