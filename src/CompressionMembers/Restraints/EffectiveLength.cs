@@ -31,10 +31,12 @@ public static class EffectiveLength
     // Remembers the springs behind a restraint made here, so that the finite-element method can model them.
     private static readonly ConditionalWeakTable<AxisRestraint, SpringPair> Springs = new();
 
-    internal sealed class SpringPair(EndSpring bottom, EndSpring top)
+    internal sealed class SpringPair(EndSpring bottom, EndSpring top, double eiNm2, double lengthM)
     {
         internal EndSpring Bottom { get; } = bottom;
         internal EndSpring Top { get; } = top;
+        internal double FlexuralRigidityNm2 { get; } = eiNm2;
+        internal double LengthM { get; } = lengthM;
     }
 
     /// <summary>The exact effective length factor K from the end springs.</summary>
@@ -83,17 +85,33 @@ public static class EffectiveLength
         var tc = top.AsEndCondition;
         bool ideal = bc.HasValue && tc.HasValue;
         var r = new AxisRestraint(k, text, ideal ? bc : null, ideal ? tc : null, ideal ? EffectiveLengthBasis.Theoretical : null, []);
-        Springs.AddOrUpdate(r, new SpringPair(bottom, top));
+        Springs.AddOrUpdate(r, new SpringPair(bottom, top, elasticModulus.Pascals * secondMoment.MetersToTheFourth, length.Meters));
         return r;
     }
 
-    /// <summary>The springs behind a restraint made by <see cref="FromEndSprings"/>, if it is one.</summary>
-    internal static bool TryGetSprings(AxisRestraint restraint, out EndSpring bottom, out EndSpring top)
+    /// <summary>The restraint about one axis of a member-to-be, with E from the material and I from the section about that axis.</summary>
+    /// <param name="bottom">Restraint at the bottom end.</param>
+    /// <param name="top">Restraint at the top end.</param>
+    /// <param name="material">The material (its elastic modulus for stability).</param>
+    /// <param name="section">The section.</param>
+    /// <param name="axis">The buckling axis, <see cref="Results.BucklingAxis.Y"/> or <see cref="Results.BucklingAxis.Z"/>.</param>
+    /// <param name="length">The member's system length.</param>
+    /// <returns>The restraint.</returns>
+    /// <exception cref="ArgumentNullException">A reference argument is null.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The axis is not Y or Z, or the length is not finite or not positive.</exception>
+    /// <exception cref="ArgumentException">The restraints leave a mechanism.</exception>
+    public static AxisRestraint FromEndSprings(EndSpring bottom, EndSpring top, Materials.Material material, Sections.Section section,
+        Results.BucklingAxis axis, Length length)
     {
-        if (Springs.TryGetValue(restraint, out var p)) { bottom = p.Bottom; top = p.Top; return true; }
-        bottom = top = EndSpring.Pinned;
-        return false;
+        ArgumentNullException.ThrowIfNull(material);
+        ArgumentNullException.ThrowIfNull(section);
+        if (axis != Results.BucklingAxis.Y && axis != Results.BucklingAxis.Z)
+            throw new ArgumentOutOfRangeException(nameof(axis), axis, "The axis must be Y or Z.");
+        return FromEndSprings(bottom, top, material.ElasticModulus, axis == Results.BucklingAxis.Y ? section.SecondMomentY : section.SecondMomentZ, length);
     }
+
+    /// <summary>The springs behind a restraint made by <c>FromEndSprings</c>, if it is one, with the EI and L it was made for.</summary>
+    internal static bool TryGetSprings(AxisRestraint restraint, out SpringPair? springs) => Springs.TryGetValue(restraint, out springs);
 
     /// <summary>K on doubles: EI in N·m², L in m.</summary>
     internal static double Factor(EndSpring bottom, EndSpring top, double eiNm2, double lengthM)

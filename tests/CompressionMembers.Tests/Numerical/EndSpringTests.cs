@@ -194,6 +194,29 @@ public class EndSpringTests
     }
 
     [Fact]
+    public void FromEndSprings_MaterialAndSectionOverload_SameAsQuantities()
+    {
+        var section = new RectangleSection(Length.FromMillimeters(60), Length.FromMillimeters(90));
+        var end = EndSpring.Rotational(RotationalStiffness.FromKilonewtonMetersPerRadian(80));
+        var a = EffectiveLength.FromEndSprings(end, EndSpring.Pinned, Fixtures.Steel, section, CompressionMembers.Results.BucklingAxis.Z, Length.FromMillimeters(3000));
+        var b = EffectiveLength.FromEndSprings(end, EndSpring.Pinned, Fixtures.Steel.ElasticModulus, section.SecondMomentZ, Length.FromMillimeters(3000));
+        Assert.Equal(b.BucklingFactor, a.BucklingFactor);
+        Assert.Equal(b.BasisText, a.BasisText);
+    }
+
+    [Fact]
+    public void Check_SpringRestraintMadeForAnotherLength_FiniteElementsRefuse()
+    {
+        // K from springs depends on kθ L / EI: a restraint made for 3 m must not be used on a 4 m member unnoticed.
+        var section = new RectangleSection(Length.FromMillimeters(60), Length.FromMillimeters(60));
+        var ax = EffectiveLength.FromEndSprings(EndSpring.Rotational(RotationalStiffness.FromKilonewtonMetersPerRadian(50)), EndSpring.Pinned,
+            Fixtures.Steel, section, CompressionMembers.Results.BucklingAxis.Y, Length.FromMillimeters(3000));
+        var member = Member.Create(section, Fixtures.Steel, Length.FromMillimeters(4000), Restraint.Same(ax), "post");
+        var ex = Assert.Throws<MethodNotApplicableException>(() => Check.Evaluate(member, DesignActions.Compression(Force.FromKilonewtons(1)), ResistanceMethods.FiniteElementCritical));
+        Assert.Contains("was made for EI = 216 kN·m² and L = 3000 mm, but the member has EI = 216 kN·m² and L = 4000 mm about y", ex.Message);
+    }
+
+    [Fact]
     public void FromEndSprings_FreeBothEnds_ThrowsMechanism()
     {
         var ex = Assert.Throws<ArgumentException>(() => K(EndSpring.Translational(ForcePerLength.Zero), EndSpring.Free));

@@ -40,7 +40,7 @@ public static class BucklingAnalysis
     }
 
     /// <summary>The buckling model of a member about one axis: E and I of the member, its end conditions (ideal ends,
-    /// or the springs of a restraint made by <see cref="EffectiveLength.FromEndSprings"/>) and rigid braces at its bracing positions.</summary>
+    /// or the springs of a restraint made by <c>EffectiveLength.FromEndSprings</c>) and rigid braces at its bracing positions.</summary>
     /// <param name="member">The member.</param>
     /// <param name="axis">The axis, <see cref="BucklingAxis.Y"/> or <see cref="BucklingAxis.Z"/>.</param>
     /// <returns>The model (reference 1 N at the top).</returns>
@@ -60,17 +60,31 @@ public static class BucklingAnalysis
     internal static bool TryModelOf(in Resolution.ResolvedMember m, BucklingAxis axis, out BucklingModel? model, out string? why)
     {
         var r = axis == BucklingAxis.Y ? m.Member.Restraint.AboutY : m.Member.Restraint.AboutZ;
+        double i = axis == BucklingAxis.Y ? m.SecondMomentYM4 : m.SecondMomentZM4;
+        string ax = axis == BucklingAxis.Y ? "y" : "z";
         EndSpring bottom, top;
-        if (EffectiveLength.TryGetSprings(r, out var sb, out var st)) { bottom = sb; top = st; }
+        if (EffectiveLength.TryGetSprings(r, out var sp))
+        {
+            // K from springs depends on EI and L: a restraint made for another member would give a K that is not this member's.
+            double ei = m.ElasticModulusPa * i;
+            if (Math.Abs(sp!.LengthM - m.LengthM) > 1e-9 * m.LengthM || Math.Abs(sp.FlexuralRigidityNm2 - ei) > 1e-9 * ei)
+            {
+                model = null;
+                why = $"The end-spring restraint about {ax} was made for EI = {Internal.Guard.Show(sp.FlexuralRigidityNm2 / 1e3)} kN·m² and L = {Internal.Guard.Show(sp.LengthM * 1e3)} mm, " +
+                    $"but the member has EI = {Internal.Guard.Show(ei / 1e3)} kN·m² and L = {Internal.Guard.Show(m.LengthM * 1e3)} mm about {ax}; its K does not apply. " +
+                    "Make the restraint with the member's own E, I and length (EffectiveLength.FromEndSprings with the material and section).";
+                return false;
+            }
+            bottom = sp.Bottom; top = sp.Top;
+        }
         else if (r.BottomEnd is { } b && r.TopEnd is { } t) { bottom = EndSpring.FromEndCondition(b); top = EndSpring.FromEndCondition(t); }
         else
         {
             model = null;
-            why = $"The restraint about {(axis == BucklingAxis.Y ? "y" : "z")} is given only as K ({r.BasisText}); a numerical model needs the end conditions " +
+            why = $"The restraint about {ax} is given only as K ({r.BasisText}); a numerical model needs the end conditions " +
                 "or springs themselves. Use AxisRestraint.FromEndConditions or EffectiveLength.FromEndSprings, or build a BucklingModel.";
             return false;
         }
-        double i = axis == BucklingAxis.Y ? m.SecondMomentYM4 : m.SecondMomentZM4;
         var mod = BucklingModel.Uniform(m.Member.Length, UnitsNet.Pressure.FromPascals(m.ElasticModulusPa), UnitsNet.AreaMomentOfInertia.FromMetersToTheFourth(i), bottom, top);
         foreach (var p in r.BracingPositions) mod = mod.WithBraceAt(p);
         model = mod.WithName(m.Member.Name);
