@@ -60,18 +60,20 @@ public sealed class FiniteElementBuckling : IResistanceMethod
     }
 
     /// <summary>The elastic critical load about one axis, N.</summary>
-    internal double CriticalForceN(in ResolvedMember member, BucklingAxis axis)
+    internal double CriticalForceN(in ResolvedMember member, BucklingAxis axis, out int elements)
     {
         BucklingAnalysis.TryModelOf(member, axis, out var model, out _);
         if (ElementCount is int n) model = model!.WithElementCount(n);
-        return BucklingAnalysis.Solve(model!, 1).Lowest.CriticalForceN;
+        var r = BucklingAnalysis.Solve(model!, 1);
+        elements = r.ElementCount;
+        return r.Lowest.CriticalForceN;
     }
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
-        double ncrY = CriticalForceN(member, BucklingAxis.Y);
-        double ncrZ = CriticalForceN(member, BucklingAxis.Z);
+        double ncrY = CriticalForceN(member, BucklingAxis.Y, out int elementsY);
+        double ncrZ = CriticalForceN(member, BucklingAxis.Z, out int elementsZ);
         double e = member.ElasticModulusPa, a = member.AreaM2;
         double squash = a * member.StrengthPa;
         // The equivalent effective length π √(EI / Ncr): what K·L would give the same load by Euler's formula.
@@ -87,7 +89,8 @@ public sealed class FiniteElementBuckling : IResistanceMethod
             trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Member.Material.Source);
             TraceCommon.SectionAndLengths(trace, member);
             trace.Note("The supports themselves are modelled (ideal ends or end springs, rigid braces); K is not used.", Ref);
-            trace.Add("n", "elements per member", ElementCount is null ? "automatic mesh" : TraceCommon.Input, ElementCount ?? 48, StepUnit.None, Ref);
+            trace.Add("ny", "elements in the model about y", ElementCount is null ? "automatic mesh" : "requested " + ElementCount.Value.ToString(System.Globalization.CultureInfo.InvariantCulture), elementsY, StepUnit.None, Ref);
+            trace.Add("nz", "elements in the model about z", ElementCount is null ? "automatic mesh" : "requested " + ElementCount.Value.ToString(System.Globalization.CultureInfo.InvariantCulture), elementsZ, StepUnit.None, Ref);
             trace.Add("Ncr,y", "elastic critical force about y", "lowest λ of K φ = λ Kg φ (about y)", ncrY, StepUnit.Force, Ref);
             trace.Add("Ncr,z", "elastic critical force about z", "lowest λ of K φ = λ Kg φ (about z)", ncrZ, StepUnit.Force, Ref);
             trace.Add("Lcr,y (FE)", "equivalent effective length about y", "π √(E Iy / Ncr,y)", lY, StepUnit.Length, Ref);
