@@ -38,12 +38,13 @@ internal static class Program
             ("06-steel-davit-prop.txt", DavitProp()),
             ("07-steel-canoe-rack-post.txt", EccentricBracketPost()),
             ("08-steel-roof-strut-angle.txt", RoofStrutAngle()),
+            ("09-steel-door-post-on-footing-springs.txt", DoorPost()),
         };
 
         Console.WriteLine("Summary");
         Console.WriteLine("-------");
         foreach (var (file, r) in reports)
-            Console.WriteLine($"  {r.Member.Name,-34} {r.Method.Identity.Name,-48} u = {NumberFormat.Number(r.Utilisation),7}  {(r.Passed ? "passes" : "FAILS")}");
+            Console.WriteLine($"  {r.Member.Name,-34} {r.Method.Identity.Name,-58} u = {NumberFormat.Number(r.Utilisation),7}  {(r.Passed ? "passes" : "FAILS")}");
         Console.WriteLine();
 
         foreach (var (file, r) in reports)
@@ -97,6 +98,22 @@ internal static class Program
         Member.Create(AngleSection.Equal(Mm(60), Mm(5)), AluminiumAlloys.EnAw6063T6Extrusion, Length.FromMeters(1.4),
             Restraint.PinnedBothAxes, "A5 boat-lift brace"),
         DesignActions.Compression(Force.FromKilonewtons(22), "boat on the lift"), ResistanceMethods.Eurocode9);
+
+    /// <summary>The post beside the lake door: its base plate on a small pad footing is neither pinned nor fixed
+    /// (a rotational spring of 150 kN·m/rad, estimated from the anchor bolts); the head is held by the door lintel.
+    /// K about each axis comes from the elastic column's characteristic equation with those springs.</summary>
+    private static CheckResult DoorPost()
+    {
+        var section = new RectangularHollowSection(Mm(100), Mm(100), Mm(5));
+        var steel = IsotropicMaterial.GenericStructuralSteel;
+        var length = Length.FromMeters(3.4);
+        var footing = EndSpring.Rotational(RotationalStiffness.FromKilonewtonMetersPerRadian(150));
+        var aboutY = EffectiveLength.FromEndSprings(footing, EndSpring.Pinned, steel, section, BucklingAxis.Y, length);
+        var aboutZ = EffectiveLength.FromEndSprings(footing, EndSpring.Pinned, steel, section, BucklingAxis.Z, length);
+        var post = Member.Create(section, steel, length, new Restraint(aboutY, aboutZ), "P4 lake-door post");
+        return Check.EvaluateWithTrace(post, DesignActions.Compression(Force.FromKilonewtons(210), "roof snow + door track"),
+            ResistanceMethods.PerryRobertson(Methods.Classical.PerryImperfection.FromBowRatio(1000)));
+    }
 
     /// <summary>The steel prop under the boat davit: a round tube, fixed in the slab, pinned at the davit arm.</summary>
     private static CheckResult DavitProp() => Check.EvaluateWithTrace(
