@@ -40,7 +40,8 @@ public class ClassicalPropertyTests
             var m = Fixtures.PinnedBar(b, h, l);
             double c1 = Check.Evaluate(m, Actions(eccentric), method).DesignResistanceN;
             double c2 = Check.Evaluate(m.WithLength(Length.FromMillimeters(l * grow)), Actions(eccentric), method).DesignResistanceN;
-            return c2 <= c1;
+            // The secant capacity is a root found to 1e-10 relative: allow that much where the two are nearly equal.
+            return c2 <= c1 * (1 + 1e-9);
         }, seed: Seed, iter: 300);
     }
 
