@@ -288,4 +288,14 @@ public class NdsColumnStabilityTests
         foreach (var g in new[] { NdsGrades.DouglasFirLarchNo2, NdsGrades.SprucePineFirNo2, NdsGrades.SouthernPineNo2TwoByFour, NdsGrades.Glulam24F18E })
             Assert.Contains("from memory — verify against the current supplement", g.Source);
     }
+
+    [Fact]
+    public void Material_NegativeFc_ThrowsUnderCallersName()
+    {
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => new NdsTimberMaterial("x", NdsProduct.SawnLumber, Pressure.FromPoundsForcePerSquareInch(-1000),
+            Pressure.FromPoundsForcePerSquareInch(1000), Pressure.FromPoundsForcePerSquareInch(1e6), Pressure.FromPoundsForcePerSquareInch(5e5),
+            Density.FromKilogramsPerCubicMeter(500), "user-defined"));
+        Assert.Equal("fc", ex.ParamName);
+        Assert.Contains("got -1000 psi", ex.Message);
+    }
 }

@@ -172,4 +172,15 @@ public class TimberMaterialTests
         Near.Relative(360, s.Depth.Millimeters, 1e-12, "8 × 45 mm laminations (common practice)");
         Assert.Throws<ArgumentOutOfRangeException>(() => TimberSizes.Glulam(Length.FromMillimeters(140), 1));
     }
+
+    [Fact]
+    public void Create_ZeroE005_ThrowsUnderCallersName()
+    {
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => TimberMaterial.Create("x", TimberProduct.SolidSoftwood,
+            Pressure.FromMegapascals(20), Pressure.FromMegapascals(20), Pressure.FromMegapascals(10), Pressure.FromMegapascals(3),
+            Pressure.FromMegapascals(8000), Pressure.FromMegapascals(0), Pressure.FromMegapascals(500),
+            Density.FromKilogramsPerCubicMeter(350), Density.FromKilogramsPerCubicMeter(420), "user-defined"));
+        Assert.Equal("e005", ex.ParamName);
+        Assert.Contains("E0,05 must be greater than 0; got 0 MPa", ex.Message);
+    }
 }

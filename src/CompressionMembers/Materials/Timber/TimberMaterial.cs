@@ -68,6 +68,7 @@ public sealed class TimberMaterial : Material
     {
         if (product == TimberProduct.Lvl)
             throw new ArgumentException("Use TimberMaterial.Lvl for laminated veneer lumber: it needs the declared size-effect exponent s.", nameof(product));
+        CheckBaseValues(fc0k, e005, gmean, rhomean);
         return new TimberMaterial(name, product, fc0k, fmk, ft0k, fvk, e0mean, e005, gmean, rhok, rhomean, double.NaN, source);
     }
 
@@ -91,7 +92,17 @@ public sealed class TimberMaterial : Material
         Pressure e0mean, Pressure e005, Pressure gmean, Density rhok, Density rhomean, double sizeEffectExponent, string source)
     {
         Guard.InRange(sizeEffectExponent, 0, 1, nameof(sizeEffectExponent), "", "Size-effect exponent s");
+        CheckBaseValues(fc0k, e005, gmean, rhomean);
         return new TimberMaterial(name, TimberProduct.Lvl, fc0k, fmk, ft0k, fvk, e0mean, e005, gmean, rhok, rhomean, sizeEffectExponent, source);
+    }
+
+    // The base class validates these too, but under its own parameter names; check them first under the caller's.
+    private static void CheckBaseValues(Pressure fc0k, Pressure e005, Pressure gmean, Density rhomean)
+    {
+        Si.Pascals(fc0k, nameof(fc0k), "Characteristic compression strength fc,0,k");
+        Si.Pascals(e005, nameof(e005), "Fifth-percentile modulus E0,05");
+        Si.Pascals(gmean, nameof(gmean), "Mean shear modulus Gmean");
+        Si.KilogramsPerCubicMeter(rhomean, nameof(rhomean), "Mean density ρmean");
     }
 
     /// <inheritdoc/>

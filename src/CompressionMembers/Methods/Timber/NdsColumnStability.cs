@@ -356,6 +356,17 @@ public sealed class NdsColumnStability : IResistanceMethod
             trace.Add("fc", "actual compression stress", "P / A", fc, StepUnit.Stress, "NDS 2018 3.6.3");
             if (bending)
             {
+                trace.Add("CM", "wet service factor on Fb", TimberRules.Input, adj.WetServiceFb, StepUnit.None, "NDS 2018 4.3.3");
+                trace.Add("Ct", "temperature factor on Fb", TimberRules.Input, adj.TemperatureFb, StepUnit.None, "NDS 2018 2.3.3");
+                trace.Add("CF", "size factor on Fb", TimberRules.Input, adj.SizeFb, StepUnit.None, "NDS 2018 4.3.6");
+                trace.Add("Ci", "incising factor on Fb", TimberRules.Input, adj.IncisingFb, StepUnit.None, "NDS 2018 4.3.8");
+                trace.Add("Cr", "repetitive member factor on Fb", TimberRules.Input, adj.Repetitive, StepUnit.None, "NDS 2018 4.3.9");
+                trace.Add("Cfu", "flat use factor on Fb about z", TimberRules.Input, adj.FlatUse, StepUnit.None, "NDS 2018 4.3.7");
+                if (!asd)
+                {
+                    trace.Add("KF", "format conversion factor for Fb", "2.54", kfB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
+                    trace.Add("φb", "resistance factor for bending", "0.85", phiB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
+                }
                 trace.Add("Fb*", "bending design value with all factors but CL and Cfu", asd ? "Fb CD CM Ct CF Ci Cr" : "Fb CM Ct CF Ci Cr KF φb λ", fbStar, StepUnit.Stress, "NDS 2018 Table 4.3.1");
                 if (ltb)
                 {
