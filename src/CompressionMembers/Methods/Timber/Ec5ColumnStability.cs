@@ -38,7 +38,8 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     /// Between 1 and 2.</param>
     /// <param name="modificationFactor">kmod, or null for Table 3.1 by service class and load duration. Greater than 0
     /// and at most 1.5.</param>
-    /// <param name="applySizeFactor">Whether to raise fm,k by kh for depths below the reference depth (3.2(3), 3.3(3), 3.4(3)).</param>
+    /// <param name="applySizeFactor">Whether to raise fm,k by kh for depths below the reference depth (3.2(3), 3.3(3), 3.4(3));
+    /// the reduction of LVL deeper than 300 mm (3.4(3)) applies either way.</param>
     /// <param name="checkLateralTorsionalBuckling">Whether to check 6.3.3 (6.35) when there is bending about y.</param>
     /// <exception cref="ArgumentOutOfRangeException">A value is undefined, not finite or out of range.</exception>
     public Ec5ColumnStability(ServiceClass serviceClass = ServiceClass.Class1, double? materialFactor = null, double? modificationFactor = null,
@@ -127,7 +128,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
                 if (trace) rule = $"min((600 / {dim})^0.1, 1.1)";
                 return Math.Min(Math.Pow(0.600 / depthM, 0.1), 1.1);
             default:
-                if (depthM >= 0.300) { if (trace) rule = $"1 ({dim} ≥ 300 mm)"; return 1.0; }
+                // LVL: 3.4(3) applies to every depth other than 300 mm, so deeper sections are reduced (kh < 1).
                 if (trace) rule = $"min((300 / {dim})^s, 1.2)";
                 return Math.Min(Math.Pow(0.300 / depthM, m.SizeEffectExponent), 1.2);
         }
@@ -173,8 +174,14 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.Kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
         i.GammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
         string ruleY = "", ruleZ = "";
-        i.KhY = ApplySizeFactor ? SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr) : 1.0;
-        i.KhZ = ApplySizeFactor ? SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b") : 1.0;
+        // Without the size factor, increases are skipped but a reduction (LVL deeper than 300 mm) still applies.
+        i.KhY = SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr);
+        i.KhZ = SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b");
+        if (!ApplySizeFactor)
+        {
+            i.KhY = Math.Min(i.KhY, 1.0);
+            i.KhZ = Math.Min(i.KhZ, 1.0);
+        }
         i.NEdN = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions);
         i.MzEdNm = TimberRules.MomentZ(actions);
@@ -201,8 +208,8 @@ public sealed class Ec5ColumnStability : IResistanceMethod
             if (i.MyEdNm != 0 || i.MzEdNm != 0)
             {
                 string khRef = SizeFactorRef(mat.Product);
-                trace.Add("kh,y", "size factor for bending about y (depth h)", ApplySizeFactor ? ruleY : "1 (not applied)", i.KhY, StepUnit.None, khRef);
-                trace.Add("kh,z", "size factor for bending about z (depth b)", ApplySizeFactor ? ruleZ : "1 (not applied)", i.KhZ, StepUnit.None, khRef);
+                trace.Add("kh,y", "size factor for bending about y (depth h)", ApplySizeFactor ? ruleY : "min(" + ruleY + ", 1) (increase not applied)", i.KhY, StepUnit.None, khRef);
+                trace.Add("kh,z", "size factor for bending about z (depth b)", ApplySizeFactor ? ruleZ : "min(" + ruleZ + ", 1) (increase not applied)", i.KhZ, StepUnit.None, khRef);
             }
             Ec5Trace.Write(trace, i, o, "");
             if (ChecksLateralTorsionalBuckling && i.MyEdNm != 0 && !i.Rectangular)
