@@ -257,6 +257,22 @@ public class Eurocode9CompressionTests
     }
 
     [Fact]
+    public void Evaluate_MajorAxisBendingOfOpenSection_Refused()
+    {
+        var ex = Refused(Pinned(new ChannelSection(Mm(100), Mm(50), Mm(5), Mm(4)), A6082T6, 1000), Kn(10).WithEccentricity(Mm(10), Mm(0)), ResistanceMethods.Eurocode9);
+        Assert.Contains("lateral-torsional buckling", ex.Message);
+    }
+
+    [Fact]
+    public void Evaluate_MinorAxisBendingOfChannel_Checked()
+    {
+        // Flanges (30 − 5)/5 = 5 ≤ 6ε, web 90/5 = 18 ≤ 22ε: class 3 (Table 6.2).
+        var r = Check.Evaluate(Pinned(new ChannelSection(Mm(100), Mm(30), Mm(5), Mm(5)), A6082T6, 1000), Kn(10).WithEccentricity(Mm(0), Mm(10)), ResistanceMethods.Eurocode9);
+        Assert.Equal(FailureMode.CombinedCompressionAndBending, r.GoverningMode);
+        Assert.Equal(BucklingAxis.Z, r.GoverningAxis);
+    }
+
+    [Fact]
     public void Evaluate_InitialBow_Refused()
     {
         var ex = Refused(Pinned(Rhs100x5, A6082T6, 1000), Kn(10).WithInitialBow(Mm(3), null), ResistanceMethods.Eurocode9);

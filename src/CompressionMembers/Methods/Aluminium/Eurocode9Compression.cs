@@ -21,7 +21,8 @@ namespace CompressionMembers.Methods.Aluminium;
 /// the gross section. Torsional modes use the standard's torsional α and λ̄0 (radiating outstands or general) and
 /// Aeff with the HAZ but, for angles and tees, without the local-buckling reduction (ρc = 1), as 6.3.1.4 directs.</para>
 /// <para>Bending: the first-order moment at the governing section is N·e + max |M_end| about each axis; M_Rd = W_el f0 / γM1
-/// (the elastic modulus, conservative for class 1 and 2). Class 4 sections and welded members in bending are refused.</para>
+/// (the elastic modulus, conservative for class 1 and 2). Class 4 sections, welded members in bending, and bending about y of
+/// open sections (where lateral-torsional buckling, not checked here, may govern) are refused.</para>
 /// <para>Source: EN 1999-1-1:2007+A1:2009; the tables and formulas were recalled (from memory) and every step says which
 /// clause it applies. Partial factors γM1 = 1.10 and γM2 = 1.25 are the recommended values of 6.1.3; a national annex may
 /// change them. Thread safety: immutable.</para>
@@ -138,6 +139,8 @@ public sealed class Eurocode9Compression : IResistanceMethod
         {
             if (Welding.IsWelded)
                 return Applicability.NotApplicable("compression with bending of a welded member (the HAZ in the section modulus and ωx of localised welds) is not covered by this method; check the member unwelded with your own HAZ-reduced properties.");
+            if (IsOpenForTorsion(section.Kind) && (actions.EccentricityYM != 0 || actions.EndMomentYTopNm != 0 || actions.EndMomentYBottomNm != 0))
+                return Applicability.NotApplicable("bending about the major axis y of an open section can fail by lateral-torsional buckling, which this method does not check; only bending about z is covered for angles, tees, channels and I sections.");
             if (c.Class == 4)
                 return Applicability.NotApplicable("compression with bending of a class 4 section needs the effective section modulus and the shift of the neutral axis, which this method does not compute; choose a section of class 1 to 3.");
         }
