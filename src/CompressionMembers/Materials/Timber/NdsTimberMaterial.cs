@@ -41,6 +41,7 @@ public sealed class NdsTimberMaterial : Material
         if (eMin.Pascals > e.Pascals)
             throw new ArgumentOutOfRangeException(nameof(eMin), (double)eMin.Value, $"Emin must not exceed E ({Si.Given(e)}); got {Si.Given(eMin)}.");
         Product = product;
+        FbPa = fb.Pascals;   // kept once in SI, so that a check never converts a quantity
         BendingValue = fb;
         Modulus = e;
     }
@@ -66,6 +67,8 @@ public sealed class NdsTimberMaterial : Material
 
     /// <inheritdoc/>
     public override MaterialKind Kind => MaterialKind.Timber;
+
+    internal double FbPa { get; }
 
     /// <summary>The product family.</summary>
     public NdsProduct Product { get; }

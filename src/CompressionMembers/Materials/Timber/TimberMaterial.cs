@@ -39,6 +39,11 @@ public sealed class TimberMaterial : Material
             throw new ArgumentOutOfRangeException(nameof(rhok), (double)rhok.Value,
                 $"The characteristic density ρk must not exceed the mean density ρmean ({Si.Given(rhomean)}); got {Si.Given(rhok)}.");
         Product = product;
+        // SI doubles kept once, so that a check never converts a quantity (STACK.md: conversions are 8–12× a double).
+        FmkPa = fmk.Pascals;
+        E0MeanPa = em;
+        GMeanPa = gmean.Pascals;
+        RhokKgM3 = rhok.KilogramsPerCubicMeter;
         BendingStrength = fmk;
         TensionStrength = ft0k;
         ShearStrength = fvk;
@@ -107,6 +112,11 @@ public sealed class TimberMaterial : Material
 
     /// <inheritdoc/>
     public override MaterialKind Kind => MaterialKind.Timber;
+
+    internal double FmkPa { get; }
+    internal double E0MeanPa { get; }
+    internal double GMeanPa { get; }
+    internal double RhokKgM3 { get; }
 
     /// <summary>The product type.</summary>
     public TimberProduct Product { get; }

@@ -119,7 +119,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         switch (m.Product)
         {
             case TimberProduct.SolidSoftwood or TimberProduct.SolidHardwood:
-                if (m.CharacteristicDensity.KilogramsPerCubicMeter > 700) { if (trace) rule = "1 (ρk > 700 kg/m³)"; return 1.0; }
+                if (m.RhokKgM3 > 700) { if (trace) rule = "1 (ρk > 700 kg/m³)"; return 1.0; }
                 if (depthM >= 0.150) { if (trace) rule = $"1 ({dim} ≥ 150 mm)"; return 1.0; }
                 if (trace) rule = $"min((150 / {dim})^0.2, 1.3)";
                 return Math.Min(Math.Pow(0.150 / depthM, 0.2), 1.3);
@@ -156,9 +156,9 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.LefZM = member.EffectiveLengthZM;
         i.LefLtbM = member.EffectiveLengthTorsionalM;
         i.Fc0kPa = member.StrengthPa;
-        i.FmkPa = mat.BendingStrength.Pascals;
+        i.FmkPa = mat.FmkPa;
         i.E005Pa = member.ElasticModulusPa;
-        i.G005Pa = mat.ShearModulus.Pascals * member.ElasticModulusPa / mat.MeanModulus.Pascals;
+        i.G005Pa = mat.GMeanPa * member.ElasticModulusPa / mat.E0MeanPa;
         i.BetaC = En1995Factors.BetaCUnchecked(mat.Product);
         i.Km = i.Rectangular ? 0.7 : 1.0;
         i.UseSoftwoodLtbFormula = mat.Product == TimberProduct.SolidSoftwood;
@@ -174,17 +174,21 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.Kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
         i.GammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
         string ruleY = "", ruleZ = "";
-        // Without the size factor, increases are skipped but a reduction (LVL deeper than 300 mm) still applies.
-        i.KhY = SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr);
-        i.KhZ = SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b");
-        if (!ApplySizeFactor)
-        {
-            i.KhY = Math.Min(i.KhY, 1.0);
-            i.KhZ = Math.Min(i.KhZ, 1.0);
-        }
         i.NEdN = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions);
         i.MzEdNm = TimberRules.MomentZ(actions);
+        i.KhY = i.KhZ = 1.0;
+        if (i.MyEdNm != 0 || i.MzEdNm != 0)   // kh only matters with bending (and costs two powers)
+        {
+            // Without the size factor, increases are skipped but a reduction (LVL deeper than 300 mm) still applies.
+            i.KhY = SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr);
+            i.KhZ = SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b");
+            if (!ApplySizeFactor)
+            {
+                i.KhY = Math.Min(i.KhY, 1.0);
+                i.KhZ = Math.Min(i.KhZ, 1.0);
+            }
+        }
         i.CheckLtb = ChecksLateralTorsionalBuckling;
         Ec5Kernel.Run(i, out var o);
 

@@ -115,7 +115,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         var mat = (TimberMaterial)member.Member.Material;
         if (_betaNMs is null)
         {
-            var why = En1995Factors.CharringCoverage(mat.Product, mat.CharacteristicDensity.KilogramsPerCubicMeter);
+            var why = En1995Factors.CharringCoverage(mat.Product, mat.RhokKgM3);
             if (why is not null) return Applicability.NotApplicable(why);
         }
         return Applicability.Applicable;
@@ -127,7 +127,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     /// <summary>Effective charring depth def = βn t + k0 d0 (4.1).</summary>
     internal static double EffectiveDepth(double tS, double betaNMs) => betaNMs * tS + K0(tS) * D0M;
 
-    private double BetaN(TimberMaterial m) => _betaNMs ?? En1995Factors.CharringRateMmPerMin(m.Product, m.CharacteristicDensity.KilogramsPerCubicMeter, true) / 60000.0;
+    private double BetaN(TimberMaterial m) => _betaNMs ?? En1995Factors.CharringRateMmPerMin(m.Product, m.RhokKgM3, true) / 60000.0;
 
     private double Kfi(TimberMaterial m) => _kfi ?? En1995Factors.KfiUnchecked(m.Product);
 

@@ -205,8 +205,8 @@ public sealed class NdsColumnStability : IResistanceMethod
 
     private static void Slenderness(in ResolvedMember m, out double d1, out double d2, out double r1, out double r2)
     {
-        if (m.Member.Section is CircleSection c)
-            d1 = d2 = c.Diameter.Meters * Math.Sqrt(Math.PI) / 2;   // 3.7.3: the square of equal area
+        if (m.SectionKind == SectionKind.SolidCircle)
+            d1 = d2 = 2 * m.FibrePositiveYM * Math.Sqrt(Math.PI) / 2;   // 3.7.3: the square of equal area
         else
             TimberRules.Dimensions(m, out d2, out d1);               // d1 = depth h (buckling about y), d2 = width b
         r1 = m.EffectiveLengthYM / d1;
@@ -263,7 +263,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         double kfC = asd ? 1 : 2.40, kfB = asd ? 1 : 2.54, kfE = asd ? 1 : 1.76;
         double phiC = asd ? 1 : 0.90, phiB = asd ? 1 : 0.85, phiS = asd ? 1 : 0.85;
 
-        double fcRef = member.StrengthPa, fbRef = mat.BendingValue.Pascals, eminRef = member.ElasticModulusPa;
+        double fcRef = member.StrengthPa, fbRef = mat.FbPa, eminRef = member.ElasticModulusPa;
         double fcStar = fcRef * cd * adj.WetServiceFc * adj.TemperatureFc * adj.SizeFc * adj.IncisingFc * kfC * phiC * lam;
         double eminP = eminRef * adj.WetServiceEmin * adj.TemperatureEmin * adj.IncisingEmin * kfE * phiS;
         double fbStar = fbRef * cd * adj.WetServiceFb * adj.TemperatureFb * adj.SizeFb * adj.IncisingFb * adj.Repetitive * kfB * phiB * lam;
