@@ -298,4 +298,33 @@ public class NdsColumnStabilityTests
         Assert.Equal("fc", ex.ParamName);
         Assert.Contains("got -1000 psi", ex.Message);
     }
+
+    [Theory]
+    [InlineData(LoadDurationClass.Permanent, 0.6)]     // NDS Table N3: 1.4D (common-practice mapping, from memory)
+    [InlineData(LoadDurationClass.LongTerm, 0.7)]      // live load from storage
+    [InlineData(LoadDurationClass.MediumTerm, 0.8)]    // occupancy live load, snow
+    [InlineData(LoadDurationClass.ShortTerm, 0.8)]
+    [InlineData(LoadDurationClass.Instantaneous, 1.0)] // wind, earthquake
+    public void TimeEffectFactorFor_Class_MapsToLambda(LoadDurationClass d, double lambda) =>
+        Assert.Equal(lambda, NdsColumnStability.TimeEffectFactorFor(d));
+
+    [Fact]
+    public void LoadDurationFactorFor_Unspecified_Throws()
+    {
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => NdsColumnStability.LoadDurationFactorFor(LoadDurationClass.Unspecified));
+        Assert.Equal("duration", ex.ParamName);
+    }
+
+    [Fact]
+    public void AppliesTo_RbAbove50_Refuses()
+    {
+        // NDS 3.3.3.7: RB = √(le d / b²) ≤ 50. 1.5 × 11.25 in (2×12) free to twist over 240 in: le = 1.84 × 240,
+        // RB = √(441.6 × 11.25 / 2.25) = 47.0 — within; over 300 in: √(552 × 11.25/2.25) = 52.5 — refused.
+        var restraint = Restraint.PinnedBothAxes.WithAboutZ(AxisRestraint.PinnedPinned.WithBracingAt(Length.FromInches(75), Length.FromInches(150), Length.FromInches(225)));
+        var m = Post(1.5, 11.25, 300, r: restraint);
+        var a = Load(1).WithEccentricity(Length.FromInches(1), Length.Zero);
+        var ex = Assert.Throws<MethodNotApplicableException>(() => Check.Evaluate(m, a, ResistanceMethods.NdsColumnAsd));
+        Assert.Contains("RB = 52.5", ex.Message);
+        Assert.Contains("NDS 3.3.3.7", ex.Message);
+    }
 }
