@@ -134,7 +134,7 @@ public class NdsColumnStabilityTests
         // P = 2 kips, e = 1 in about y (M1 = 2 kip·in), CD = 1.0. CF taken 1.0 here (the test sets no size factor).
         // Hand: le1/d1 = 72/5.5, le2/d2 = 36/1.5 = 24; Cp from the governing 24; fb1 = M1/S1, S1 = 1.5 × 5.5²/6;
         // CL: lu/d = 13.1 → le = 1.63 lu + 3d (Table 3.3.3), RB = √(le d/b²), FbE = 1.20 E′min/RB², (3.3-6);
-        // (3.9-3) = (fc/F′c)² + fb1/[F′b1(1 − fc/FcE1)].
+        // (15.4-1) = (fc/F′c)² + fc(6e/d)[1 + 0.234 fc/FcE1]/[F′b1(1 − fc/FcE1)], fc(6e/d) = M1/S1.
         var restraint = Restraint.PinnedBothAxes.WithAboutZ(AxisRestraint.PinnedPinned.WithBracingAt(Length.FromInches(36)));
         var m = Post(1.5, 5.5, 72, r: restraint);
         var a = Load(2).WithEccentricity(Length.FromInches(1), Length.Zero);
@@ -145,8 +145,8 @@ public class NdsColumnStabilityTests
         double s1 = 1.5 * 5.5 * 5.5 / 6, fb1 = 2000 / s1;
         double le = 1.63 * 72 + 3 * 5.5, rb = Math.Sqrt(le * 5.5 / (1.5 * 1.5)), fbE = 1.20 * emin / (rb * rb);
         double x = fbE / 900, cl = (1 + x) / 1.9 - Math.Sqrt(Math.Pow((1 + x) / 1.9, 2) - x / 0.95);
-        double u = Math.Pow(fc / fcP, 2) + fb1 / (900 * cl * (1 - fc / fcE1));
-        Near.Relative(u, r.Utilisation, 1e-9, "hand calculation of NDS 2018 (3.9-3) with CL of (3.3-6)");
+        double u = Math.Pow(fc / fcP, 2) + fb1 * (1 + 0.234 * fc / fcE1) / (900 * cl * (1 - fc / fcE1));
+        Near.Relative(u, r.Utilisation, 1e-9, "hand calculation of NDS 2018 (15.4-1), no side load, with CL of (3.3-6) (from memory)");
         Assert.Equal(BucklingAxis.Y, r.GoverningAxis);
         Assert.Equal(FailureMode.CombinedCompressionAndBending, r.GoverningMode);
         Near.Relative(cl, r.Torsional.ReductionFactor, 1e-12, "CL by hand");
@@ -161,8 +161,9 @@ public class NdsColumnStabilityTests
         var r = Check.Evaluate(m, a, ResistanceMethods.NdsColumnAsd);
         double area = 5.5 * 5.5, fc = 10000 / area, s = 5.5 * 5.5 * 5.5 / 6, fb = 10000 / s;
         double fcE = 0.822 * 580000 / Math.Pow(120 / 5.5, 2), fcP = 1350 * HandCp(fcE, 1350, 0.8);
-        double u = Math.Pow(fc / fcP, 2) + fb / (900 * (1 - fc / fcE)) + fb / (900 * (1 - fc / fcE));
-        Near.Relative(u, r.Utilisation, 1e-9, "hand calculation of NDS 2018 (3.9-3), both axes");
+        double amp = (1 + 0.234 * fc / fcE) / (900 * (1 - fc / fcE));
+        double u = Math.Pow(fc / fcP, 2) + fb * amp + fb * amp;
+        Near.Relative(u, r.Utilisation, 1e-9, "hand calculation of NDS 2018 (15.4-1), both axes (from memory)");
         Assert.Equal(BucklingAxis.Both, r.GoverningAxis);
     }
 
@@ -286,5 +287,44 @@ public class NdsColumnStabilityTests
     {
         foreach (var g in new[] { NdsGrades.DouglasFirLarchNo2, NdsGrades.SprucePineFirNo2, NdsGrades.SouthernPineNo2TwoByFour, NdsGrades.Glulam24F18E })
             Assert.Contains("from memory — verify against the current supplement", g.Source);
+    }
+
+    [Fact]
+    public void Material_NegativeFc_ThrowsUnderCallersName()
+    {
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => new NdsTimberMaterial("x", NdsProduct.SawnLumber, Pressure.FromPoundsForcePerSquareInch(-1000),
+            Pressure.FromPoundsForcePerSquareInch(1000), Pressure.FromPoundsForcePerSquareInch(1e6), Pressure.FromPoundsForcePerSquareInch(5e5),
+            Density.FromKilogramsPerCubicMeter(500), "user-defined"));
+        Assert.Equal("fc", ex.ParamName);
+        Assert.Contains("got -1000 psi", ex.Message);
+    }
+
+    [Theory]
+    [InlineData(LoadDurationClass.Permanent, 0.6)]     // NDS Table N3: 1.4D (common-practice mapping, from memory)
+    [InlineData(LoadDurationClass.LongTerm, 0.7)]      // live load from storage
+    [InlineData(LoadDurationClass.MediumTerm, 0.8)]    // occupancy live load, snow
+    [InlineData(LoadDurationClass.ShortTerm, 0.8)]
+    [InlineData(LoadDurationClass.Instantaneous, 1.0)] // wind, earthquake
+    public void TimeEffectFactorFor_Class_MapsToLambda(LoadDurationClass d, double lambda) =>
+        Assert.Equal(lambda, NdsColumnStability.TimeEffectFactorFor(d));
+
+    [Fact]
+    public void LoadDurationFactorFor_Unspecified_Throws()
+    {
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => NdsColumnStability.LoadDurationFactorFor(LoadDurationClass.Unspecified));
+        Assert.Equal("duration", ex.ParamName);
+    }
+
+    [Fact]
+    public void AppliesTo_RbAbove50_Refuses()
+    {
+        // NDS 3.3.3.7: RB = √(le d / b²) ≤ 50. 1.5 × 11.25 in (2×12) free to twist over 240 in: le = 1.84 × 240,
+        // RB = √(441.6 × 11.25 / 2.25) = 47.0 — within; over 300 in: √(552 × 11.25/2.25) = 52.5 — refused.
+        var restraint = Restraint.PinnedBothAxes.WithAboutZ(AxisRestraint.PinnedPinned.WithBracingAt(Length.FromInches(75), Length.FromInches(150), Length.FromInches(225)));
+        var m = Post(1.5, 11.25, 300, r: restraint);
+        var a = Load(1).WithEccentricity(Length.FromInches(1), Length.Zero);
+        var ex = Assert.Throws<MethodNotApplicableException>(() => Check.Evaluate(m, a, ResistanceMethods.NdsColumnAsd));
+        Assert.Contains("RB = 52.5", ex.Message);
+        Assert.Contains("NDS 3.3.3.7", ex.Message);
     }
 }

@@ -90,6 +90,8 @@ public class TimberMaterialTests
             Pressure.FromMegapascals(4.1), Pressure.FromMegapascals(13800), Pressure.FromMegapascals(11600), Pressure.FromMegapascals(600),
             Density.FromKilogramsPerCubicMeter(480), Density.FromKilogramsPerCubicMeter(510), 0.15, "user-defined (test)");
         Near.Relative(Math.Pow(300 / 200.0, 0.15), Ec5ColumnStability.SizeFactor(lvl, true, 0.2, out _, false), 1e-14, "EN 1995-1-1 (3.3)");
+        // 3.4(3) applies to every depth other than 300 mm: a 400 mm deep LVL is reduced, (300/400)^0.15 = 0.95777.
+        Near.Relative(Math.Pow(0.75, 0.15), Ec5ColumnStability.SizeFactor(lvl, true, 0.4, out _, false), 1e-14, "EN 1995-1-1 (3.3), h > 300 mm");
         Assert.Equal(0.1, En1995Factors.BetaC(lvl.Product));
         Assert.Equal(1.2, En1995Factors.GammaM(lvl.Product));
         var ex = Assert.Throws<ArgumentOutOfRangeException>(() => TimberMaterial.Lvl("x", Pressure.FromMegapascals(35), Pressure.FromMegapascals(44), Pressure.FromMegapascals(35),
@@ -171,5 +173,16 @@ public class TimberMaterialTests
         var s = TimberSizes.Glulam(Length.FromMillimeters(140), 8);
         Near.Relative(360, s.Depth.Millimeters, 1e-12, "8 × 45 mm laminations (common practice)");
         Assert.Throws<ArgumentOutOfRangeException>(() => TimberSizes.Glulam(Length.FromMillimeters(140), 1));
+    }
+
+    [Fact]
+    public void Create_ZeroE005_ThrowsUnderCallersName()
+    {
+        var ex = Assert.Throws<ArgumentOutOfRangeException>(() => TimberMaterial.Create("x", TimberProduct.SolidSoftwood,
+            Pressure.FromMegapascals(20), Pressure.FromMegapascals(20), Pressure.FromMegapascals(10), Pressure.FromMegapascals(3),
+            Pressure.FromMegapascals(8000), Pressure.FromMegapascals(0), Pressure.FromMegapascals(500),
+            Density.FromKilogramsPerCubicMeter(350), Density.FromKilogramsPerCubicMeter(420), "user-defined"));
+        Assert.Equal("e005", ex.ParamName);
+        Assert.Contains("E0,05 must be greater than 0; got 0 MPa", ex.Message);
     }
 }

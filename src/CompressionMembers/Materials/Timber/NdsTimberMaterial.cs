@@ -33,15 +33,30 @@ public sealed class NdsTimberMaterial : Material
     /// <exception cref="ArgumentException">The name or source is empty.</exception>
     /// <exception cref="ArgumentOutOfRangeException">A value is not finite or not positive, Emin &gt; E, or the product is undefined.</exception>
     public NdsTimberMaterial(string speciesAndGrade, NdsProduct product, Pressure fc, Pressure fb, Pressure e, Pressure eMin, Density density, string source)
-        : base(speciesAndGrade, eMin, ShearFrom(e), fc, density, source)
+        : base(speciesAndGrade, Checked(eMin, nameof(eMin), "Reference modulus Emin"), ShearFrom(e), Checked(fc, nameof(fc), "Reference compression design value Fc"),
+            CheckedDensity(density), source)
     {
         if (!Enum.IsDefined(product)) throw new ArgumentOutOfRangeException(nameof(product), product, $"Unknown NDS product {(int)product}.");
         Si.Pascals(fb, nameof(fb), "Reference bending design value Fb");
         if (eMin.Pascals > e.Pascals)
             throw new ArgumentOutOfRangeException(nameof(eMin), (double)eMin.Value, $"Emin must not exceed E ({Si.Given(e)}); got {Si.Given(eMin)}.");
         Product = product;
+        FbPa = fb.Pascals;   // kept once in SI, so that a check never converts a quantity
         BendingValue = fb;
         Modulus = e;
+    }
+
+    // The base class validates these too, but under its own parameter names; check them first under the caller's.
+    private static Pressure Checked(Pressure p, string name, string what)
+    {
+        Si.Pascals(p, name, what);
+        return p;
+    }
+
+    private static Density CheckedDensity(Density density)
+    {
+        Si.KilogramsPerCubicMeter(density, nameof(density), "Density");
+        return density;
     }
 
     private static Pressure ShearFrom(Pressure e)
@@ -52,6 +67,8 @@ public sealed class NdsTimberMaterial : Material
 
     /// <inheritdoc/>
     public override MaterialKind Kind => MaterialKind.Timber;
+
+    internal double FbPa { get; }
 
     /// <summary>The product family.</summary>
     public NdsProduct Product { get; }

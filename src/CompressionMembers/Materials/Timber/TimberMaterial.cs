@@ -39,6 +39,11 @@ public sealed class TimberMaterial : Material
             throw new ArgumentOutOfRangeException(nameof(rhok), (double)rhok.Value,
                 $"The characteristic density ρk must not exceed the mean density ρmean ({Si.Given(rhomean)}); got {Si.Given(rhok)}.");
         Product = product;
+        // SI doubles kept once, so that a check never converts a quantity (STACK.md: conversions are 8–12× a double).
+        FmkPa = fmk.Pascals;
+        E0MeanPa = em;
+        GMeanPa = gmean.Pascals;
+        RhokKgM3 = rhok.KilogramsPerCubicMeter;
         BendingStrength = fmk;
         TensionStrength = ft0k;
         ShearStrength = fvk;
@@ -68,6 +73,7 @@ public sealed class TimberMaterial : Material
     {
         if (product == TimberProduct.Lvl)
             throw new ArgumentException("Use TimberMaterial.Lvl for laminated veneer lumber: it needs the declared size-effect exponent s.", nameof(product));
+        CheckBaseValues(fc0k, e005, gmean, rhomean);
         return new TimberMaterial(name, product, fc0k, fmk, ft0k, fvk, e0mean, e005, gmean, rhok, rhomean, double.NaN, source);
     }
 
@@ -91,11 +97,26 @@ public sealed class TimberMaterial : Material
         Pressure e0mean, Pressure e005, Pressure gmean, Density rhok, Density rhomean, double sizeEffectExponent, string source)
     {
         Guard.InRange(sizeEffectExponent, 0, 1, nameof(sizeEffectExponent), "", "Size-effect exponent s");
+        CheckBaseValues(fc0k, e005, gmean, rhomean);
         return new TimberMaterial(name, TimberProduct.Lvl, fc0k, fmk, ft0k, fvk, e0mean, e005, gmean, rhok, rhomean, sizeEffectExponent, source);
+    }
+
+    // The base class validates these too, but under its own parameter names; check them first under the caller's.
+    private static void CheckBaseValues(Pressure fc0k, Pressure e005, Pressure gmean, Density rhomean)
+    {
+        Si.Pascals(fc0k, nameof(fc0k), "Characteristic compression strength fc,0,k");
+        Si.Pascals(e005, nameof(e005), "Fifth-percentile modulus E0,05");
+        Si.Pascals(gmean, nameof(gmean), "Mean shear modulus Gmean");
+        Si.KilogramsPerCubicMeter(rhomean, nameof(rhomean), "Mean density ρmean");
     }
 
     /// <inheritdoc/>
     public override MaterialKind Kind => MaterialKind.Timber;
+
+    internal double FmkPa { get; }
+    internal double E0MeanPa { get; }
+    internal double GMeanPa { get; }
+    internal double RhokKgM3 { get; }
 
     /// <summary>The product type.</summary>
     public TimberProduct Product { get; }

@@ -38,7 +38,8 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     /// Between 1 and 2.</param>
     /// <param name="modificationFactor">kmod, or null for Table 3.1 by service class and load duration. Greater than 0
     /// and at most 1.5.</param>
-    /// <param name="applySizeFactor">Whether to raise fm,k by kh for depths below the reference depth (3.2(3), 3.3(3), 3.4(3)).</param>
+    /// <param name="applySizeFactor">Whether to raise fm,k by kh for depths below the reference depth (3.2(3), 3.3(3), 3.4(3));
+    /// the reduction of LVL deeper than 300 mm (3.4(3)) applies either way.</param>
     /// <param name="checkLateralTorsionalBuckling">Whether to check 6.3.3 (6.35) when there is bending about y.</param>
     /// <exception cref="ArgumentOutOfRangeException">A value is undefined, not finite or out of range.</exception>
     public Ec5ColumnStability(ServiceClass serviceClass = ServiceClass.Class1, double? materialFactor = null, double? modificationFactor = null,
@@ -118,7 +119,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         switch (m.Product)
         {
             case TimberProduct.SolidSoftwood or TimberProduct.SolidHardwood:
-                if (m.CharacteristicDensity.KilogramsPerCubicMeter > 700) { if (trace) rule = "1 (ρk > 700 kg/m³)"; return 1.0; }
+                if (m.RhokKgM3 > 700) { if (trace) rule = "1 (ρk > 700 kg/m³)"; return 1.0; }
                 if (depthM >= 0.150) { if (trace) rule = $"1 ({dim} ≥ 150 mm)"; return 1.0; }
                 if (trace) rule = $"min((150 / {dim})^0.2, 1.3)";
                 return Math.Min(Math.Pow(0.150 / depthM, 0.2), 1.3);
@@ -127,7 +128,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
                 if (trace) rule = $"min((600 / {dim})^0.1, 1.1)";
                 return Math.Min(Math.Pow(0.600 / depthM, 0.1), 1.1);
             default:
-                if (depthM >= 0.300) { if (trace) rule = $"1 ({dim} ≥ 300 mm)"; return 1.0; }
+                // LVL: 3.4(3) applies to every depth other than 300 mm, so deeper sections are reduced (kh < 1).
                 if (trace) rule = $"min((300 / {dim})^s, 1.2)";
                 return Math.Min(Math.Pow(0.300 / depthM, m.SizeEffectExponent), 1.2);
         }
@@ -155,9 +156,9 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.LefZM = member.EffectiveLengthZM;
         i.LefLtbM = member.EffectiveLengthTorsionalM;
         i.Fc0kPa = member.StrengthPa;
-        i.FmkPa = mat.BendingStrength.Pascals;
+        i.FmkPa = mat.FmkPa;
         i.E005Pa = member.ElasticModulusPa;
-        i.G005Pa = mat.ShearModulus.Pascals * member.ElasticModulusPa / mat.MeanModulus.Pascals;
+        i.G005Pa = mat.GMeanPa * member.ElasticModulusPa / mat.E0MeanPa;
         i.BetaC = En1995Factors.BetaCUnchecked(mat.Product);
         i.Km = i.Rectangular ? 0.7 : 1.0;
         i.UseSoftwoodLtbFormula = mat.Product == TimberProduct.SolidSoftwood;
@@ -173,11 +174,21 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.Kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
         i.GammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
         string ruleY = "", ruleZ = "";
-        i.KhY = ApplySizeFactor ? SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr) : 1.0;
-        i.KhZ = ApplySizeFactor ? SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b") : 1.0;
         i.NEdN = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions);
         i.MzEdNm = TimberRules.MomentZ(actions);
+        i.KhY = i.KhZ = 1.0;
+        if (i.MyEdNm != 0 || i.MzEdNm != 0)   // kh only matters with bending (and costs two powers)
+        {
+            // Without the size factor, increases are skipped but a reduction (LVL deeper than 300 mm) still applies.
+            i.KhY = SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr);
+            i.KhZ = SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b");
+            if (!ApplySizeFactor)
+            {
+                i.KhY = Math.Min(i.KhY, 1.0);
+                i.KhZ = Math.Min(i.KhZ, 1.0);
+            }
+        }
         i.CheckLtb = ChecksLateralTorsionalBuckling;
         Ec5Kernel.Run(i, out var o);
 
@@ -201,8 +212,8 @@ public sealed class Ec5ColumnStability : IResistanceMethod
             if (i.MyEdNm != 0 || i.MzEdNm != 0)
             {
                 string khRef = SizeFactorRef(mat.Product);
-                trace.Add("kh,y", "size factor for bending about y (depth h)", ApplySizeFactor ? ruleY : "1 (not applied)", i.KhY, StepUnit.None, khRef);
-                trace.Add("kh,z", "size factor for bending about z (depth b)", ApplySizeFactor ? ruleZ : "1 (not applied)", i.KhZ, StepUnit.None, khRef);
+                trace.Add("kh,y", "size factor for bending about y (depth h)", ApplySizeFactor ? ruleY : "min(" + ruleY + ", 1) (increase not applied)", i.KhY, StepUnit.None, khRef);
+                trace.Add("kh,z", "size factor for bending about z (depth b)", ApplySizeFactor ? ruleZ : "min(" + ruleZ + ", 1) (increase not applied)", i.KhZ, StepUnit.None, khRef);
             }
             Ec5Trace.Write(trace, i, o, "");
             if (ChecksLateralTorsionalBuckling && i.MyEdNm != 0 && !i.Rectangular)

@@ -25,7 +25,7 @@ namespace CompressionMembers.Methods.Timber;
 /// unprotected surfaces).</para>
 /// <para>Fire design strength fd,fi = kmod,fi kfi fk / γM,fi (2.1) with kmod,fi = 1.0 (4.2.2(5)), kfi of Table 2.1 (1.25 solid,
 /// 1.15 glulam, 1.1 LVL) and γM,fi = 1.0 (2.3(1), recommended; a national annex may change it). The relative slenderness
-/// is unchanged by kfi (it scales both strength and stiffness); kh is not applied in fire.</para>
+/// is unchanged by kfi (it scales both strength and stiffness); kh does not raise strengths in fire (the LVL reduction above 300 mm stays).</para>
 /// <para>With three sides exposed the residual section's centroid moves by def/2 away from the protected face; the axial
 /// load, still on the original axis, then bends the residual section, and this moment is added (conservatively, in
 /// absolute value) to the design moment. The actions are the design actions of the fire situation, given by the user.
@@ -115,7 +115,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         var mat = (TimberMaterial)member.Member.Material;
         if (_betaNMs is null)
         {
-            var why = En1995Factors.CharringCoverage(mat.Product, mat.CharacteristicDensity.KilogramsPerCubicMeter);
+            var why = En1995Factors.CharringCoverage(mat.Product, mat.RhokKgM3);
             if (why is not null) return Applicability.NotApplicable(why);
         }
         return Applicability.Applicable;
@@ -127,7 +127,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     /// <summary>Effective charring depth def = βn t + k0 d0 (4.1).</summary>
     internal static double EffectiveDepth(double tS, double betaNMs) => betaNMs * tS + K0(tS) * D0M;
 
-    private double BetaN(TimberMaterial m) => _betaNMs ?? En1995Factors.CharringRateMmPerMin(m.Product, m.CharacteristicDensity.KilogramsPerCubicMeter, true) / 60000.0;
+    private double BetaN(TimberMaterial m) => _betaNMs ?? En1995Factors.CharringRateMmPerMin(m.Product, m.RhokKgM3, true) / 60000.0;
 
     private double Kfi(TimberMaterial m) => _kfi ?? En1995Factors.KfiUnchecked(m.Product);
 
@@ -156,7 +156,9 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         Residual(Exposure, b, h, defM, out bFi, out hFi, out shiftZ, out shiftY);
         i.Kmod = Kfi(mat);      // kmod,fi (= 1.0) × kfi: fd,fi = kmod,fi kfi fk / γM,fi (2.1)
         i.GammaM = FireMaterialFactor;
-        i.KhY = i.KhZ = 1.0;
+        // kh is not used to raise strengths in fire; a reduction (LVL deeper than 300 mm) is kept, on the residual depth.
+        i.KhY = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(hFi, 1e-9), out _, false), 1.0);
+        i.KhZ = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(bFi, 1e-9), out _, false), 1.0);
         i.NEdN = actions.AxialForceN;
         double n = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions) + (IncludesCentroidShift ? n * shiftZ : 0);
@@ -235,7 +237,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
                 trace.Add("A,fi", "residual area", "b,fi h,fi", i.AreaM2, StepUnit.Area, ResRef);
                 trace.Add("Iy,fi", "residual second moment about y", "b,fi h,fi³ / 12", i.IyM4, StepUnit.SecondMoment, ResRef);
                 trace.Add("Iz,fi", "residual second moment about z", "h,fi b,fi³ / 12", i.IzM4, StepUnit.SecondMoment, ResRef);
-                trace.Note("The EN 1995-1-1 checks follow on the residual section with fire design values (kh not applied).", "EN 1995-1-2 4.2.2(2)");
+                trace.Note("The EN 1995-1-1 checks follow on the residual section with fire design values (no kh increase).", "EN 1995-1-2 4.2.2(2)");
                 Ec5Trace.Write(trace, i, o, ",fi");
             }
             else

@@ -13,8 +13,9 @@ namespace CompressionMembers.Methods.Timber;
 /// <summary>
 /// Wood columns to the ANSI/AWC National Design Specification (NDS 2018, US practice): column stability factor Cp of
 /// 3.7.1 (the Ylinen form) with FcE = 0.822 E′min / (le/d)², the slenderness limit le/d ≤ 50 of 3.7.1.4, the adjustment
-/// factors of Table 4.3.1 (ASD: CD, CM, Ct, CF, Ci; LRFD: KF, φ, λ) and combined bending and axial compression (3.9.2,
-/// equation 3.9-3) about one or both axes, with the beam stability factor CL of 3.3.3 for edgewise bending.
+/// factors of Table 4.3.1 (ASD: CD, CM, Ct, CF, Ci; LRFD: KF, φ, λ) and combined bending and axial compression about
+/// one or both axes: the interaction of 3.9.2 (3.9-3) in the form of 15.4.1 (15.4-1) for an eccentric axial load, with the
+/// beam stability factor CL of 3.3.3 for edgewise bending.
 /// </summary>
 /// <remarks>
 /// <para>Cp = (1 + FcE/Fc*)/(2c) − √[((1 + FcE/Fc*)/(2c))² − (FcE/Fc*)/c] (3.7-1), c = 0.8 sawn lumber, 0.85 round timber
@@ -25,8 +26,11 @@ namespace CompressionMembers.Methods.Timber;
 /// construction), instantaneous 1.6 (ten minutes, wind and earthquake). LRFD time effect λ (NDS Table N3): permanent 0.6,
 /// long-term 0.7, medium-term 0.8, short-term 0.8, instantaneous 1.0. KF = 2.40 (Fc), 2.54 (Fb), 1.76 (Emin); φ = 0.90
 /// (compression), 0.85 (bending, stability). All recalled from memory of NDS 2018; verify against your edition.</para>
-/// <para>Bending stresses are first order: fb = (|P e| + max |M,end|) / S; the amplification terms of 3.9-3 provide the
-/// second-order effect. Edgewise bending is about y (depth d1 = h), flatwise about z (d2 = b). The effective length for
+/// <para>The actions carry only end effects (eccentricity, end moments), so the bending stress is the eccentric term of
+/// (15.4-1): fc (6e/d) = (|P e| + max |M,end|) / S, amplified by [1 + 0.234 fc/FcE] in the numerator and by the
+/// 3.9-3 denominators [1 − fc/FcE1] and [1 − fc/FcE2 − (fbe1/FbE)²]; end moments are taken as equivalent end
+/// eccentricities e = M/P (conservative for double curvature). (15.4-1) recalled from memory; verify.
+/// Edgewise bending is about y (depth d1 = h), flatwise about z (d2 = b). The effective length for
 /// CL is the Table 3.3.3 entry for any loading (2.06 lu, 1.63 lu + 3d, 1.84 lu), lu being the member's length free to twist.
 /// Thread safety: immutable.</para>
 /// </remarks>
@@ -65,7 +69,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         _cd = loadDurationFactor;
         _lambda = timeEffectFactor;
         AllowsConstructionSlenderness = allowConstructionSlenderness;
-        Identity = new MethodIdentity(format == NdsDesignFormat.Asd ? Name + " (ASD)" : Name + " (LRFD)", "ANSI/AWC NDS", "2018", "3.7.1, 3.9.2, 3.3.3, Table 4.3.1",
+        Identity = new MethodIdentity(format == NdsDesignFormat.Asd ? Name + " (ASD)" : Name + " (LRFD)", "ANSI/AWC NDS", "2018", "3.7.1, 3.9.2, 15.4.1, 3.3.3, Table 4.3.1",
             Settings(format, Adjustments, loadDurationFactor, timeEffectFactor, allowConstructionSlenderness));
     }
 
@@ -201,8 +205,8 @@ public sealed class NdsColumnStability : IResistanceMethod
 
     private static void Slenderness(in ResolvedMember m, out double d1, out double d2, out double r1, out double r2)
     {
-        if (m.Member.Section is CircleSection c)
-            d1 = d2 = c.Diameter.Meters * Math.Sqrt(Math.PI) / 2;   // 3.7.3: the square of equal area
+        if (m.SectionKind == SectionKind.SolidCircle)
+            d1 = d2 = 2 * m.FibrePositiveYM * Math.Sqrt(Math.PI) / 2;   // 3.7.3: the square of equal area
         else
             TimberRules.Dimensions(m, out d2, out d1);               // d1 = depth h (buckling about y), d2 = width b
         r1 = m.EffectiveLengthYM / d1;
@@ -259,7 +263,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         double kfC = asd ? 1 : 2.40, kfB = asd ? 1 : 2.54, kfE = asd ? 1 : 1.76;
         double phiC = asd ? 1 : 0.90, phiB = asd ? 1 : 0.85, phiS = asd ? 1 : 0.85;
 
-        double fcRef = member.StrengthPa, fbRef = mat.BendingValue.Pascals, eminRef = member.ElasticModulusPa;
+        double fcRef = member.StrengthPa, fbRef = mat.FbPa, eminRef = member.ElasticModulusPa;
         double fcStar = fcRef * cd * adj.WetServiceFc * adj.TemperatureFc * adj.SizeFc * adj.IncisingFc * kfC * phiC * lam;
         double eminP = eminRef * adj.WetServiceEmin * adj.TemperatureEmin * adj.IncisingEmin * kfE * phiS;
         double fbStar = fbRef * cd * adj.WetServiceFb * adj.TemperatureFb * adj.SizeFb * adj.IncisingFb * adj.Repetitive * kfB * phiB * lam;
@@ -303,8 +307,9 @@ public sealed class NdsColumnStability : IResistanceMethod
             double q = fb1 / fbE;
             den2 = 1 - fc / fcE2 - q * q;
             if ((fb1 > 0 && den1 <= 0) || (fb2 > 0 && den2 <= 0) || (fb1 > 0 && q >= 1)) unbounded = true;
-            t1 = fb1 > 0 ? fb1 / (fb1P * den1) : 0;
-            t2 = fb2 > 0 ? fb2 / (fb2P * den2) : 0;
+            // (15.4-1) with no side loads: eccentric terms fc(6e/d) = M/S with the 0.234 end-eccentricity terms.
+            t1 = fb1 > 0 ? fb1 * (1 + 0.234 * fc / fcE1) / (fb1P * den1) : 0;
+            t2 = fb2 > 0 ? fb2 * (1 + 0.234 * fc / fcE2 + 0.234 * q * q) / (fb2P * den2) : 0;
             u = unbounded ? double.PositiveInfinity : a * a + t1 + t2;
         }
 
@@ -351,6 +356,17 @@ public sealed class NdsColumnStability : IResistanceMethod
             trace.Add("fc", "actual compression stress", "P / A", fc, StepUnit.Stress, "NDS 2018 3.6.3");
             if (bending)
             {
+                trace.Add("CM", "wet service factor on Fb", TimberRules.Input, adj.WetServiceFb, StepUnit.None, "NDS 2018 4.3.3");
+                trace.Add("Ct", "temperature factor on Fb", TimberRules.Input, adj.TemperatureFb, StepUnit.None, "NDS 2018 2.3.3");
+                trace.Add("CF", "size factor on Fb", TimberRules.Input, adj.SizeFb, StepUnit.None, "NDS 2018 4.3.6");
+                trace.Add("Ci", "incising factor on Fb", TimberRules.Input, adj.IncisingFb, StepUnit.None, "NDS 2018 4.3.8");
+                trace.Add("Cr", "repetitive member factor on Fb", TimberRules.Input, adj.Repetitive, StepUnit.None, "NDS 2018 4.3.9");
+                trace.Add("Cfu", "flat use factor on Fb about z", TimberRules.Input, adj.FlatUse, StepUnit.None, "NDS 2018 4.3.7");
+                if (!asd)
+                {
+                    trace.Add("KF", "format conversion factor for Fb", "2.54", kfB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
+                    trace.Add("φb", "resistance factor for bending", "0.85", phiB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
+                }
                 trace.Add("Fb*", "bending design value with all factors but CL and Cfu", asd ? "Fb CD CM Ct CF Ci Cr" : "Fb CM Ct CF Ci Cr KF φb λ", fbStar, StepUnit.Stress, "NDS 2018 Table 4.3.1");
                 if (ltb)
                 {
@@ -364,15 +380,17 @@ public sealed class NdsColumnStability : IResistanceMethod
                     trace.Note("Edgewise bending with depth not above breadth (or a round section): CL = 1.", "NDS 2018 3.3.3.1");
                 trace.Add("F′b1", "adjusted bending design value about y", "Fb* CL", fb1P, StepUnit.Stress, "NDS 2018 3.9.2");
                 trace.Add("F′b2", "adjusted bending design value about z", "Fb* Cfu", fb2P, StepUnit.Stress, "NDS 2018 3.9.2, 4.3.7");
-                trace.Add("fb1", "edgewise bending stress (about y)", "M1 / Sy", fb1, StepUnit.Stress, "NDS 2018 3.3.2");
-                trace.Add("fb2", "flatwise bending stress (about z)", "M2 / Sz", fb2, StepUnit.Stress, "NDS 2018 3.3.2");
+                trace.Add("fc(6e1/d1)", "edgewise bending stress from the end eccentricity (about y)", "My,Ed / Sy", fb1, StepUnit.Stress, "NDS 2018 15.4.1");
+                trace.Add("fc(6e2/d2)", "flatwise bending stress from the end eccentricity (about z)", "Mz,Ed / Sz", fb2, StepUnit.Stress, "NDS 2018 15.4.1");
                 trace.Add("FcE1", "critical buckling design value about y", "0.822 E′min / (le1/d1)²", fcE1, StepUnit.Stress, "NDS 2018 3.9.2");
                 trace.Add("FcE2", "critical buckling design value about z", "0.822 E′min / (le2/d2)²", fcE2, StepUnit.Stress, "NDS 2018 3.9.2");
-                trace.Add("1 − fc/FcE1", "amplification denominator about y", "1 − fc / FcE1", den1, StepUnit.None, "NDS 2018 3.9.2 (3.9-3)");
-                trace.Add("1 − fc/FcE2 − (fb1/FbE)²", "amplification denominator about z", "1 − fc / FcE2 − (fb1 / FbE)²", den2, StepUnit.None, "NDS 2018 3.9.2 (3.9-3), (3.9-4)");
+                trace.Add("1 − fc/FcE1", "amplification denominator about y", "1 − fc / FcE1", den1, StepUnit.None, "NDS 2018 3.9.2 (3.9-3), 15.4.1");
+                trace.Add("1 − fc/FcE2 − (fbe1/FbE)²", "amplification denominator about z", "1 − fc / FcE2 − (fc(6e1/d1) / FbE)²", den2, StepUnit.None, "NDS 2018 3.9.2 (3.9-4), 15.4.1");
                 if (unbounded)
-                    trace.Note("An amplification denominator is not positive (fc ≥ FcE1, fc/FcE2 + (fb1/FbE)² ≥ 1 or fb1 ≥ FbE): the member is unstable and fails.", "NDS 2018 3.9.2");
-                trace.Add("u", "combined bending and axial compression", "(fc/F′c)² + fb1/[F′b1(1 − fc/FcE1)] + fb2/[F′b2(1 − fc/FcE2 − (fb1/FbE)²)]", u, StepUnit.None, "NDS 2018 3.9.2 (3.9-3)");
+                    trace.Note("An amplification denominator is not positive (fc ≥ FcE1, fc/FcE2 + (fbe1/FbE)² ≥ 1 or fbe1 ≥ FbE): the member is unstable and fails.", "NDS 2018 3.9.2");
+                trace.Add("u", "eccentric axial compression (no side loads)",
+                    "(fc/F′c)² + fbe1 [1 + 0.234 fc/FcE1] / [F′b1 (1 − fc/FcE1)] + fbe2 [1 + 0.234 fc/FcE2 + 0.234 (fbe1/FbE)²] / [F′b2 (1 − fc/FcE2 − (fbe1/FbE)²)], fbe = fc 6e/d",
+                    u, StepUnit.None, "NDS 2018 15.4.1 (15.4-1), with 3.9.2");
             }
             else
                 trace.Add("u", "utilisation in compression", "fc / F′c", u, StepUnit.None, "NDS 2018 3.6.3, 3.7.1");
@@ -380,7 +398,7 @@ public sealed class NdsColumnStability : IResistanceMethod
 
         var axis = bending ? (fb1 > 0 && fb2 > 0 ? BucklingAxis.Both : fb1 > 0 ? BucklingAxis.Y : BucklingAxis.Z) : (govY ? BucklingAxis.Y : BucklingAxis.Z);
         var mode = bending ? FailureMode.CombinedCompressionAndBending : FailureMode.FlexuralBuckling;
-        string check = bending ? "NDS 2018 3.9.2 (3.9-3): combined bending and axial compression" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
+        string check = bending ? "NDS 2018 15.4.1 (15.4-1): eccentric axial compression, 3.9.2 interaction" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
         double cpY = Cp(fcE1 / fcStar, c), cpZ = Cp(fcE2 / fcStar, c);
         return new CheckResult(member, actions, this, fcP * area, u, axis, mode, check,
             new AxisOutcome(member.EffectiveLengthYM, member.EffectiveLengthYM / member.RadiusYM, double.NaN, fcE1 * area, cpY, fcStar * cpY * area),

@@ -56,9 +56,9 @@ internal static class TimberRules
     /// <summary>Width b (along y) and depth h (along z) of a rectangle; the diameter twice for a circle.</summary>
     internal static void Dimensions(in ResolvedMember m, out double bM, out double hM)
     {
-        if (m.Member.Section is RectangleSection r) { bM = r.Width.Meters; hM = r.Depth.Meters; }
-        else if (m.Member.Section is CircleSection c) { bM = hM = c.Diameter.Meters; }
-        else { bM = m.FibrePositiveYM + m.FibreNegativeYM; hM = m.FibrePositiveZM + m.FibreNegativeZM; }
+        // From the resolved fibre distances (doubles): a rectangle spans them exactly, a circle has radius d/2 both ways.
+        bM = m.FibrePositiveYM + m.FibreNegativeYM;
+        hM = m.FibrePositiveZM + m.FibreNegativeZM;
     }
 
     internal static double ModulusY(in ResolvedMember m) => m.SecondMomentYM4 / Math.Max(m.FibrePositiveZM, m.FibreNegativeZM);
