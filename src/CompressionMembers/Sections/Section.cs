@@ -26,7 +26,20 @@ public abstract class Section
     private protected static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
     internal readonly SectionProperties Props;
 
-    private protected Section(in SectionProperties props) => Props = props;
+    private protected Section(in SectionProperties props)
+    {
+        // Dimensions that are each valid can still be too large or too small for their powers to be represented
+        // (a 1e200 m plate has no finite I): refuse a section whose properties are not finite, positive numbers.
+        if (!Usable(props.AreaM2) || !Usable(props.IyM4) || !Usable(props.IzM4)
+            || !Usable(props.FibrePositiveZM + props.FibreNegativeZM) || !Usable(props.FibrePositiveYM + props.FibreNegativeYM))
+            throw Unrepresentable("dimensions",
+                $"The section's dimensions give properties that cannot be represented (A = {Guard.Show(props.AreaM2)} m², Iy = {Guard.Show(props.IyM4)} m⁴, Iz = {Guard.Show(props.IzM4)} m⁴); use dimensions between about 1e-6 m and 1e6 m.");
+        Props = props;
+    }
+
+    private static ArgumentOutOfRangeException Unrepresentable(string paramName, string message) => new(paramName, message);
+
+    private static bool Usable(double v) => double.IsFinite(v) && v > 0 && double.IsNormal(v);
 
     /// <summary>The shape family.</summary>
     public abstract SectionKind Kind { get; }

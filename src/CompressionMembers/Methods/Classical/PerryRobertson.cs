@@ -44,10 +44,15 @@ public sealed class PerryRobertson : IResistanceMethod
     /// <summary>The Perry–Robertson mean stress at failure.</summary>
     internal static double CriticalStress(double fPa, double sigmaEPa, double eta)
     {
-        double p = 0.5 * (fPa + (1 + eta) * sigmaEPa);
-        double disc = p * p - fPa * sigmaEPa;
-        // disc ≥ ((f − σE)/2)² ≥ 0 for η ≥ 0; the max guards against a rounding just below zero.
-        return p - Math.Sqrt(Math.Max(disc, 0));
+        // The smaller root of (f − σ)(σE − σ) = η σ σE, written as f / (q + √(q² − r)) with r = f/σE and
+        // q = ½ (r + 1 + η): the product of the roots over the larger one. This form stays finite for a very stocky
+        // strut (σE → ∞ gives f / (1 + η)) where ½[f + (1 + η)σE] − √(…) would subtract two infinities.
+        if (!(sigmaEPa > 0)) return 0;
+        double r = fPa / sigmaEPa;
+        double q = 0.5 * (r + 1 + eta);
+        double disc = q * q - r;
+        // disc ≥ ((r − 1)/2)² ≥ 0 for η ≥ 0; the max guards a rounding just below zero.
+        return fPa / (q + Math.Sqrt(Math.Max(disc, 0)));
     }
 
     private double Eta(in AxisData ax, in ResolvedActions actions) => Imperfection.Kind switch

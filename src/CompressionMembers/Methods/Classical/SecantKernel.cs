@@ -21,9 +21,11 @@ internal static class SecantKernel
         pN / aM2 * (1 + Term(pN, eyM, cyM, iyM, lcrYM, ePa, aM2) + Term(pN, ezM, czM, izM, lcrZM, ePa, aM2));
 
     /// <summary>
-    /// The load at which σmax reaches <paramref name="limitPa"/>, bracketed strictly inside (0, upperN) where upperN
-    /// is the smallest Euler load of an eccentric axis. Brent's method (MathNet), absolute accuracy 1e-12·upperN on P,
-    /// refined once more on a tighter bracket when the root is small so that the relative accuracy is 1e-10.
+    /// The load at which σmax reaches <paramref name="limitPa"/>, strictly below <paramref name="upperN"/> (the smallest
+    /// Euler load of an eccentric axis). The root is first bracketed by a sandwich that follows from the secant growing
+    /// with P: Pu = A f / (1 + Σε) is an upper bound, and Pl = A f / (1 + Σ ε sec θ(Pu)) a lower bound (ε = e c / i²).
+    /// MathNet's Brent method then solves G(P) = (P/A − f) Π cos θ + (P/A) Σ ε Π' cos θ = 0 — the secant equation
+    /// multiplied by its cosines, which is smooth up to the Euler load — on [Pl, Pu] to 1e-10 relative.
     /// </summary>
     internal static double LoadAtStress(double limitPa, double upperN, double aM2, double ePa,
         double eyM, double cyM, double iyM, double lcrYM, double ezM, double czM, double izM, double lcrZM, out int evaluations)
@@ -32,12 +34,16 @@ internal static class SecantKernel
         // state object, so that a check allocates nothing after the first call on a thread.
         var s = t_state ??= new State();
         s.Set(limitPa, aM2, ePa, eyM, cyM, iyM, lcrYM, ezM, czM, izM, lcrZM);
-        var f = t_function ??= s.Residual;
-        double hi = Math.Min(upperN * (1 - 1e-12), limitPa * aM2);
-        if (f(hi) <= 0) { evaluations = s.Count; return hi; } // only without eccentricity: the squash load governs
-        double root = Brent.FindRoot(f, 0, hi, 1e-12 * hi, 200);
-        if (root < 0.01 * hi)
-            root = Brent.FindRoot(f, 0, Math.Min(hi, 2 * root), 1e-10 * root, 200);
+        var g = t_function ??= s.Smooth;
+        double epsY = Math.Abs(eyM) * cyM / (iyM * iyM), epsZ = Math.Abs(ezM) * czM / (izM * izM);
+        double squash = limitPa * aM2;
+        if (epsY == 0 && epsZ == 0) { evaluations = 0; return Math.Min(squash, upperN); }
+        double hi = Math.Min(squash / (1 + epsY + epsZ), upperN);
+        double amplified = s.Amplified(hi);
+        double lo = double.IsFinite(amplified) ? squash / (1 + amplified) : 0;
+        if (lo > 0 && hi - lo <= 1e-12 * lo) { evaluations = s.Count; return 0.5 * (lo + hi); }
+        double accuracy = lo > 0 ? 5e-11 * lo : 1e-12 * hi;
+        double root = Brent.FindRoot(g, lo, hi, accuracy, 100);
         evaluations = s.Count;
         return root;
     }
@@ -56,10 +62,22 @@ internal static class SecantKernel
             Count = 0;
         }
 
-        internal double Residual(double p)
+        /// <summary>Σ ε sec θ at load P (infinite at or above an Euler load).</summary>
+        internal double Amplified(double p)
         {
             Count++;
-            return MaxStress(p, _a, _e, _ey, _cy, _iy, _ly, _ez, _cz, _iz, _lz) - _limit;
+            return Term(p, _ey, _cy, _iy, _ly, _e, _a) + Term(p, _ez, _cz, _iz, _lz, _e, _a);
+        }
+
+        /// <summary>The secant equation multiplied by its cosines: smooth and finite up to the Euler load.</summary>
+        internal double Smooth(double p)
+        {
+            Count++;
+            double cy = _ey == 0 ? 1 : Math.Cos(_ly / (2 * _iy) * Math.Sqrt(p / (_e * _a)));
+            double cz = _ez == 0 ? 1 : Math.Cos(_lz / (2 * _iz) * Math.Sqrt(p / (_e * _a)));
+            double epsY = Math.Abs(_ey) * _cy / (_iy * _iy), epsZ = Math.Abs(_ez) * _cz / (_iz * _iz);
+            double s = p / _a;
+            return (s - _limit) * cy * cz + s * (epsY * cz + epsZ * cy);
         }
     }
 }

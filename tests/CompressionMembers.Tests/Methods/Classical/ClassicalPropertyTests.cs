@@ -40,7 +40,8 @@ public class ClassicalPropertyTests
             var m = Fixtures.PinnedBar(b, h, l);
             double c1 = Check.Evaluate(m, Actions(eccentric), method).DesignResistanceN;
             double c2 = Check.Evaluate(m.WithLength(Length.FromMillimeters(l * grow)), Actions(eccentric), method).DesignResistanceN;
-            return c2 <= c1;
+            // The secant capacity is a root found to 1e-10 relative: allow that much where the two are nearly equal.
+            return c2 <= c1 * (1 + 1e-9);
         }, seed: Seed, iter: 300);
     }
 
@@ -81,7 +82,9 @@ public class ClassicalPropertyTests
                 : DesignActions.Compression(Force.FromNewtons(2000 * 4.4482216152605));
             var r1 = Check.Evaluate(us, aUs, method);
             var r2 = Check.Evaluate(si, aSi, method);
-            return r1.AgreesWith(r2, 1e-9);
+            // Resistance and utilisation only: for a square section the governing axis is a tie that rounding may break either way.
+            return Math.Abs(r1.DesignResistanceN - r2.DesignResistanceN) <= 1e-9 * r2.DesignResistanceN
+                && Math.Abs(r1.Utilisation - r2.Utilisation) <= 1e-9 * r2.Utilisation;
         }, seed: Seed, iter: 100);
     }
 

@@ -1,0 +1,35 @@
+using BenchmarkDotNet.Attributes;
+using CompressionMembers.Actions;
+using CompressionMembers.Materials;
+using CompressionMembers.Members;
+using CompressionMembers.Methods;
+using CompressionMembers.Reporting;
+using CompressionMembers.Restraints;
+using CompressionMembers.Results;
+using CompressionMembers.Sections;
+using UnitsNet;
+
+namespace CompressionMembers.Benchmarks;
+
+/// <summary>The cost of one check with tracing off and on, and of rendering its text and Markdown reports.</summary>
+[MemoryDiagnoser]
+public class TracingBenchmarks
+{
+    private Member _member = null!;
+    private DesignActions _actions = null!;
+    private CheckResult _traced;
+
+    [GlobalSetup]
+    public void Setup()
+    {
+        _member = Member.Create(new CircularHollowSection(Length.FromMillimeters(60.3), Length.FromMillimeters(4)), IsotropicMaterial.GenericStructuralSteel,
+            Length.FromMeters(1.6), Restraint.PinnedBothAxes, "T1 prop");
+        _actions = DesignActions.Compression(Force.FromKilonewtons(85));
+        _traced = Check.EvaluateWithTrace(_member, _actions, ResistanceMethods.Johnson);
+    }
+
+    [Benchmark(Baseline = true)] public double JohnsonUntraced() => Check.Evaluate(_member, _actions, ResistanceMethods.Johnson).Utilisation;
+    [Benchmark] public int JohnsonTraced() => Check.EvaluateWithTrace(_member, _actions, ResistanceMethods.Johnson).Steps.Count;
+    [Benchmark] public int RenderText() => TextReport.Render(_traced).Length;
+    [Benchmark] public int RenderMarkdown() => MarkdownReport.Render(_traced).Length;
+}

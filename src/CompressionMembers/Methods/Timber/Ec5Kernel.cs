@@ -1,0 +1,146 @@
+using System;
+using CompressionMembers.Results;
+
+namespace CompressionMembers.Methods.Timber;
+
+/// <summary>The inputs of the EN 1995-1-1 column and interaction kernel, in SI doubles (m, m², m³, m⁴, Pa, N, N·m).</summary>
+internal struct Ec5Input
+{
+    internal bool Rectangular;
+    internal double BM, HM;                 // width b (along y) and depth h (along z); both = d for a circle
+    internal double AreaM2, IyM4, IzM4, WyM3, WzM3, TorsionM4;
+    internal double LefYM, LefZM, LefLtbM;
+    internal double Fc0kPa, FmkPa, E005Pa, G005Pa;
+    internal double Kmod, GammaM, KhY, KhZ, BetaC, Km;
+    internal double NEdN, MyEdNm, MzEdNm;   // design compression and first-order design moments at the governing section
+    internal bool CheckLtb, UseSoftwoodLtbFormula;
+}
+
+/// <summary>What the kernel found.</summary>
+internal struct Ec5Output
+{
+    internal double IyRadM, IzRadM, LambdaY, LambdaZ, LambdaRelY, LambdaRelZ, KY, KZ, KcY, KcZ;
+    internal double Fc0dPa, FmydPa, FmzdPa, SigmaCPa, SigmaMyPa, SigmaMzPa;
+    internal bool Bending, Stocky;          // Stocky: λrel,y ≤ 0.3 and λrel,z ≤ 0.3 (6.19/6.20)
+    internal double UY, UZ;                 // (6.23)/(6.24) or (6.19)/(6.20), or the axial check alone without bending
+    internal bool LtbChecked;
+    internal double SigmaMCritPa, LambdaRelM, KCrit, ULtb;
+    internal double Utilisation, ResistanceN;
+    internal Governing Governs;
+}
+
+internal enum Governing { AboutY, AboutZ, Ltb }
+
+/// <summary>
+/// EN 1995-1-1:2004+A2:2014 §6.3.2 and §6.3.3 on doubles: relative slenderness (6.21, 6.22), instability factors k and kc
+/// (6.25 – 6.28) with βc (6.29), the interaction expressions (6.19, 6.20, 6.23, 6.24) with km (6.1.6), and lateral
+/// torsional stability σm,crit (6.31/6.32), λrel,m (6.30), kcrit (6.34) and (6.35). Pure; allocates nothing.
+/// </summary>
+internal static class Ec5Kernel
+{
+    /// <summary>Relative slenderness λrel = λ/π √(fc,0,k / E0,05) (6.21, 6.22).</summary>
+    internal static double RelativeSlenderness(double lambda, double fc0kPa, double e005Pa) =>
+        lambda / Math.PI * Math.Sqrt(fc0kPa / e005Pa);
+
+    /// <summary>k = 0.5 (1 + βc (λrel − 0.3) + λrel²) (6.27, 6.28).</summary>
+    internal static double K(double lambdaRel, double betaC) => 0.5 * (1 + betaC * (lambdaRel - 0.3) + lambdaRel * lambdaRel);
+
+    /// <summary>kc = 1 / (k + √(k² − λrel²)) (6.25, 6.26); 1 for λrel ≤ 0.3 (6.3.2(2): no reduction).</summary>
+    internal static double Kc(double lambdaRel, double betaC)
+    {
+        if (lambdaRel <= 0.3) return 1.0;
+        double k = K(lambdaRel, betaC);
+        return 1 / (k + Math.Sqrt(k * k - lambdaRel * lambdaRel));
+    }
+
+    /// <summary>kcrit of (6.34) from λrel,m.</summary>
+    internal static double KCrit(double lambdaRelM) =>
+        lambdaRelM <= 0.75 ? 1.0 : lambdaRelM <= 1.4 ? 1.56 - 0.75 * lambdaRelM : 1 / (lambdaRelM * lambdaRelM);
+
+    internal static void Run(in Ec5Input i, out Ec5Output o)
+    {
+        o = default;
+        o.IyRadM = Math.Sqrt(i.IyM4 / i.AreaM2);
+        o.IzRadM = Math.Sqrt(i.IzM4 / i.AreaM2);
+        o.LambdaY = i.LefYM / o.IyRadM;
+        o.LambdaZ = i.LefZM / o.IzRadM;
+        o.LambdaRelY = RelativeSlenderness(o.LambdaY, i.Fc0kPa, i.E005Pa);
+        o.LambdaRelZ = RelativeSlenderness(o.LambdaZ, i.Fc0kPa, i.E005Pa);
+        o.KY = K(o.LambdaRelY, i.BetaC);
+        o.KZ = K(o.LambdaRelZ, i.BetaC);
+        o.KcY = Kc(o.LambdaRelY, i.BetaC);
+        o.KcZ = Kc(o.LambdaRelZ, i.BetaC);
+
+        o.Fc0dPa = i.Kmod * i.Fc0kPa / i.GammaM;                       // 2.4.1 (2.14)
+        o.FmydPa = i.Kmod * i.KhY * i.FmkPa / i.GammaM;
+        o.FmzdPa = i.Kmod * i.KhZ * i.FmkPa / i.GammaM;
+        o.SigmaCPa = i.NEdN / i.AreaM2;
+        o.SigmaMyPa = Math.Abs(i.MyEdNm) / i.WyM3;
+        o.SigmaMzPa = Math.Abs(i.MzEdNm) / i.WzM3;
+        o.Bending = o.SigmaMyPa > 0 || o.SigmaMzPa > 0;
+        o.Stocky = o.LambdaRelY <= 0.3 && o.LambdaRelZ <= 0.3;
+
+        double my = o.SigmaMyPa / o.FmydPa, mz = o.SigmaMzPa / o.FmzdPa;
+        if (!o.Bending)
+        {
+            // Pure compression: σc,0,d ≤ kc fc,0,d, linear in the load ((6.2) with kc = 1 in the stocky range).
+            o.UY = o.SigmaCPa / (o.KcY * o.Fc0dPa);
+            o.UZ = o.SigmaCPa / (o.KcZ * o.Fc0dPa);
+        }
+        else if (o.Stocky)
+        {
+            double c = o.SigmaCPa / o.Fc0dPa;
+            o.UY = c * c + my + i.Km * mz;                           // (6.19)
+            o.UZ = c * c + i.Km * my + mz;                           // (6.20)
+        }
+        else
+        {
+            o.UY = o.SigmaCPa / (o.KcY * o.Fc0dPa) + my + i.Km * mz; // (6.23)
+            o.UZ = o.SigmaCPa / (o.KcZ * o.Fc0dPa) + i.Km * my + mz; // (6.24)
+        }
+
+        o.LtbChecked = i.CheckLtb && i.Rectangular && o.SigmaMyPa > 0;
+        if (o.LtbChecked)
+        {
+            o.SigmaMCritPa = i.UseSoftwoodLtbFormula
+                ? 0.78 * i.BM * i.BM * i.E005Pa / (i.HM * i.LefLtbM)                                   // (6.32)
+                : Math.PI * Math.Sqrt(i.E005Pa * i.IzM4 * i.G005Pa * i.TorsionM4) / (i.LefLtbM * i.WyM3); // (6.31)
+            o.LambdaRelM = Math.Sqrt(i.FmkPa / o.SigmaMCritPa);       // (6.30)
+            o.KCrit = KCrit(o.LambdaRelM);                           // (6.34)
+            double m = o.SigmaMyPa / (o.KCrit * o.FmydPa);
+            o.ULtb = m * m + o.SigmaCPa / (o.KcZ * o.Fc0dPa);         // (6.35)
+        }
+
+        o.Governs = o.UY >= o.UZ ? Governing.AboutY : Governing.AboutZ;
+        o.Utilisation = Math.Max(o.UY, o.UZ);
+        if (o.LtbChecked && o.ULtb > o.Utilisation)
+        {
+            o.Utilisation = o.ULtb;
+            o.Governs = Governing.Ltb;
+        }
+        o.ResistanceN = Math.Min(o.KcY, o.KcZ) * o.Fc0dPa * i.AreaM2;
+    }
+
+    internal static string CheckName(in Ec5Output o) => o.Governs switch
+    {
+        Governing.Ltb => "EN 1995-1-1 6.3.3 (6.35): compression with lateral torsional buckling",
+        Governing.AboutY when !o.Bending => o.LambdaRelY <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2): compression, λrel,y ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.23): column buckling about y",
+        Governing.AboutZ when !o.Bending => o.LambdaRelZ <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2): compression, λrel,z ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.24): column buckling about z",
+        Governing.AboutY => o.Stocky ? "EN 1995-1-1 6.2.4 (6.19): compression and bending, λrel ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.23): compression and bending, buckling about y",
+        _ => o.Stocky ? "EN 1995-1-1 6.2.4 (6.20): compression and bending, λrel ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.24): compression and bending, buckling about z",
+    };
+
+    internal static BucklingAxis Axis(in Ec5Output o) => o.Governs switch
+    {
+        Governing.AboutY => BucklingAxis.Y,
+        _ => BucklingAxis.Z,
+    };
+
+    internal static FailureMode Mode(in Ec5Output o)
+    {
+        if (o.Governs == Governing.Ltb) return FailureMode.LateralTorsionalBuckling;
+        if (o.Bending) return FailureMode.CombinedCompressionAndBending;
+        double kc = o.Governs == Governing.AboutY ? o.KcY : o.KcZ;
+        return kc >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
+    }
+}
