@@ -52,6 +52,23 @@ public class ResultJsonTests
         Assert.Equal(json, ResultJson.Write(back)); // and writing again gives the same bytes
     }
 
+    [Theory]
+    [InlineData("GL28h", "ec5-column", "glulam 140x180", "MediumTerm")]
+    [InlineData("6082-T6", "ec9", "CHS 60x4", "")]
+    [InlineData("DF-L-No2", "nds-asd", "4x6", "MediumTerm")]
+    public void WriteThenRead_TimberAndAluminium_ByRegistryName(string material, string method, string section, string duration)
+    {
+        var reg = NameRegistry.Default;
+        var actions = DesignActions.Compression(Force.FromKilonewtons(20), "ULS");
+        if (duration.Length > 0) actions = actions.WithLoadDuration(Enum.Parse<LoadDurationClass>(duration));
+        var m = Member.Create(reg.Section(section), reg.Material(material), Length.FromMillimeters(2400), Restraint.PinnedBothAxes, "post");
+        var original = Check.EvaluateWithTrace(m, actions, reg.Method(method));
+        string json = ResultJson.Write(original);
+        Assert.Contains($"\"registry_name\": \"{material}\"", json);
+        var back = ResultJson.Read(json);
+        Assert.Equal(TextReport.Render(original), TextReport.Render(back));
+    }
+
     [Fact]
     public void Write_CarriesVersionAndFingerprint()
     {

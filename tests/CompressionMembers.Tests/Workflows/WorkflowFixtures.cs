@@ -46,3 +46,16 @@ internal static class WorkflowFixtures
         Member.Create(new RectangleSection(Length.FromMillimeters(50), Length.FromMillimeters(50)), Fixtures.Steel,
             Length.FromMillimeters(lengthMm), Restraint.PinnedBothAxes, name);
 }
+
+/// <summary>A method that throws for sections of area between 400 and 600 mm² (a stand-in for a solver that fails to
+/// converge), and is Euler otherwise.</summary>
+internal sealed class PartlyThrowingMethod : IResistanceMethod
+{
+    public MethodIdentity Identity { get; } = new("partly throwing test method", "invented for tests", "", "");
+    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) => ResistanceMethods.Euler.AppliesTo(member, actions);
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        if (member.AreaM2 > 400e-6 && member.AreaM2 < 600e-6) throw new InvalidOperationException("no convergence (test)");
+        return ResistanceMethods.Euler.Evaluate(member, actions, trace);
+    }
+}

@@ -3,6 +3,8 @@ using System.Collections.Generic;
 using System.Collections.Immutable;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials;
+using CompressionMembers.Materials.Aluminium;
+using CompressionMembers.Materials.Timber;
 using CompressionMembers.Methods;
 using CompressionMembers.Sections;
 using CompressionMembers.Workflows.Catalogues;
@@ -13,8 +15,12 @@ namespace CompressionMembers.Workflows.Registry;
 /// the library's values. Immutable: <c>With…</c> returns an extended copy.</summary>
 /// <remarks>
 /// <para>Names ignore case. <see cref="Default"/> holds the classical methods ("euler", "johnson", "secant",
-/// "perry-robertson"), the material "generic-steel" and the built-in catalogues. Families add their own names with one
-/// line each, for example <c>NameRegistry.Default.WithMethod("ec5-column", ResistanceMethods.…)</c>.</para>
+/// "perry-robertson"), the numerical ones ("fe-critical", "second-order-elastic"), the timber methods ("ec5-column",
+/// "ec5-column-sc2", "ec5-column-sc3", "ec5-fire-r30/r60/r90", "nds-asd", "nds-lrfd") and aluminium methods ("ec9",
+/// "aluminium-constants-lrfd", "aluminium-constants-asd", "tangent-modulus"); the materials "generic-steel", the EN 338 /
+/// EN 14080 classes ("C24", "GL28h", …), NDS grades ("DF-L-No2", "SPF-No2", "SP-No2-2x4", "glulam-24F-1.8E") and EN AW
+/// extrusion alloys ("6082-T6", "6063-T6", …); and the built-in catalogues. Each name is one line of <see cref="Default"/>;
+/// users add their own the same way: <c>NameRegistry.Default.WithMaterial("my-oak", myOak)</c>.</para>
 /// <para>A section is looked up first as a designation in the registered catalogues (in the order they were added),
 /// then parsed as a <see cref="SectionSpec"/>.</para>
 /// <para>Thread safety: immutable reference type.</para>
@@ -45,8 +51,50 @@ public sealed class NameRegistry
         .WithMethod("johnson", ResistanceMethods.Johnson)
         .WithMethod("secant", ResistanceMethods.Secant)
         .WithMethod("perry-robertson", ResistanceMethods.PerryRobertsonDefault)
+        .WithMethod("fe-critical", ResistanceMethods.FiniteElementCritical)
+        .WithMethod("second-order-elastic", ResistanceMethods.SecondOrderElastic)
         .WithMaterial("generic-steel", IsotropicMaterial.GenericStructuralSteel)
-        // Timber and aluminium materials and methods are registered here, one line each, when those families land.
+        // Timber (one line each): EN 1995-1-1 and NDS methods, EN 338 / EN 14080 classes and NDS grades.
+        .WithMethod("ec5-column", ResistanceMethods.Ec5Column)
+        .WithMethod("ec5-column-sc2", ResistanceMethods.Ec5ColumnServiceClass2)
+        .WithMethod("ec5-column-sc3", ResistanceMethods.Ec5ColumnServiceClass3)
+        .WithMethod("ec5-fire-r30", ResistanceMethods.Ec5FireR30)
+        .WithMethod("ec5-fire-r60", ResistanceMethods.Ec5FireR60)
+        .WithMethod("ec5-fire-r90", ResistanceMethods.Ec5FireR90)
+        .WithMethod("nds-asd", ResistanceMethods.NdsColumnAsd)
+        .WithMethod("nds-lrfd", ResistanceMethods.NdsColumnLrfd)
+        .WithMaterial("C16", TimberGrades.C16)
+        .WithMaterial("C18", TimberGrades.C18)
+        .WithMaterial("C24", TimberGrades.C24)
+        .WithMaterial("C30", TimberGrades.C30)
+        .WithMaterial("D30", TimberGrades.D30)
+        .WithMaterial("D40", TimberGrades.D40)
+        .WithMaterial("GL24h", TimberGrades.GL24h)
+        .WithMaterial("GL28h", TimberGrades.GL28h)
+        .WithMaterial("GL30h", TimberGrades.GL30h)
+        .WithMaterial("GL32h", TimberGrades.GL32h)
+        .WithMaterial("GL24c", TimberGrades.GL24c)
+        .WithMaterial("GL28c", TimberGrades.GL28c)
+        .WithMaterial("GL30c", TimberGrades.GL30c)
+        .WithMaterial("DF-L-No2", NdsGrades.DouglasFirLarchNo2)
+        .WithMaterial("SPF-No2", NdsGrades.SprucePineFirNo2)
+        .WithMaterial("SP-No2-2x4", NdsGrades.SouthernPineNo2TwoByFour)
+        .WithMaterial("glulam-24F-1.8E", NdsGrades.Glulam24F18E)
+        // Aluminium (one line each): EN 1999-1-1 and buckling-constant methods, EN AW alloys.
+        .WithMethod("ec9", ResistanceMethods.Eurocode9)
+        .WithMethod("aluminium-constants-lrfd", ResistanceMethods.AluminiumBucklingConstantsLrfd)
+        .WithMethod("aluminium-constants-asd", ResistanceMethods.AluminiumBucklingConstantsAsd)
+        .WithMethod("tangent-modulus", ResistanceMethods.TangentModulusRambergOsgood)
+        .WithMaterial("6060-T5", AluminiumAlloys.EnAw6060T5Extrusion)
+        .WithMaterial("6060-T6", AluminiumAlloys.EnAw6060T6Extrusion)
+        .WithMaterial("6061-T6", AluminiumAlloys.EnAw6061T6Extrusion)
+        .WithMaterial("6063-T5", AluminiumAlloys.EnAw6063T5Extrusion)
+        .WithMaterial("6063-T6", AluminiumAlloys.EnAw6063T6Extrusion)
+        .WithMaterial("6005A-T6", AluminiumAlloys.EnAw6005AT6Extrusion)
+        .WithMaterial("6082-T5", AluminiumAlloys.EnAw6082T5Extrusion)
+        .WithMaterial("6082-T6", AluminiumAlloys.EnAw6082T6Extrusion)
+        .WithMaterial("6082-T6-over-5mm", AluminiumAlloys.EnAw6082T6ExtrusionOver5mm)
+        .WithMaterial("7020-T6", AluminiumAlloys.EnAw7020T6Extrusion)
         .WithCatalogue(SectionCatalogues.MetricSawnTimber)
         .WithCatalogue(SectionCatalogues.Glulam)
         .WithCatalogue(SectionCatalogues.UsDressedLumber)

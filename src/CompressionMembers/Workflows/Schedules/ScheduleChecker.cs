@@ -35,9 +35,10 @@ public static class ScheduleChecker
         {
             return new ScheduleRowResult(item, null, $"{item.Method!.Identity.Name} does not apply: {ex.Reason}", null);
         }
-        catch (InvalidOperationException ex)
+        catch (Exception ex) when (ex is not OperationCanceledException)
         {
-            return new ScheduleRowResult(item, null, ex.Message, null);
+            // A method that throws (a broken method or a solver that did not converge) still gives the row a reason.
+            return new ScheduleRowResult(item, null, $"{item.Method!.Identity.Name} failed: {ex.GetType().Name}: {ex.Message}", null);
         }
     }
 }

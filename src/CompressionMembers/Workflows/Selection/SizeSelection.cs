@@ -11,8 +11,11 @@ public sealed class SizeSelection
 {
     private readonly SizingCandidate[] _candidates;
 
-    internal SizeSelection(SizingRequest request, SizingCandidate[] candidates, int evaluations, int notApplicable, bool fellBack, string objective)
+    internal SizeSelection(SizingRequest request, SizingCandidate[] candidates, int evaluations, int notApplicable, bool fellBack, string objective,
+        int methodFailures, string? firstMethodFailure)
     {
+        MethodFailures = methodFailures;
+        FirstMethodFailure = firstMethodFailure;
         Request = request;
         _candidates = candidates;
         Evaluations = evaluations;
@@ -41,6 +44,12 @@ public sealed class SizeSelection
 
     /// <summary>Whether the pruned search found the method not monotone in size here and searched every section instead.</summary>
     public bool FellBackToExhaustive { get; }
+
+    /// <summary>Sections for which the method threw (a defect of the method); they are never chosen.</summary>
+    public int MethodFailures { get; }
+
+    /// <summary>The first such failure in words (method, section, case, exception), or null.</summary>
+    public string? FirstMethodFailure { get; }
 
     /// <summary>The objective's name.</summary>
     public string ObjectiveName { get; }

@@ -5,6 +5,7 @@ using CompressionMembers.Internal;
 using CompressionMembers.Materials;
 using CompressionMembers.Methods;
 using CompressionMembers.Resolution;
+using CompressionMembers.Results;
 using CompressionMembers.Workflows.Batch;
 using CompressionMembers.Workflows.Catalogues;
 
@@ -25,7 +26,9 @@ namespace CompressionMembers.Workflows.Selection;
 /// and <see cref="SizeSelection.FellBackToExhaustive"/> says so. <see cref="SelectExhaustively"/> evaluates every
 /// section (the reference the pruned search is tested against).</para>
 /// <para>Ties of the objective go to the entry listed first in the catalogue. Sections the method does not apply to are
-/// never chosen. Thread safety: immutable; safe from many threads.</para>
+/// never chosen. A section for which the method throws (a defect of the method) is not chosen either: it is counted in
+/// <see cref="SizeSelection.MethodFailures"/> with the first message in <see cref="SizeSelection.FirstMethodFailure"/>.
+/// Thread safety: immutable; safe from many threads.</para>
 /// </remarks>
 [Immutable]
 public sealed class SizeSelector
@@ -73,9 +76,9 @@ public sealed class SizeSelector
         {
             var again = new Run(this, request) { Evaluations = run.Evaluations };
             var all = again.Exhaustive();
-            return new SizeSelection(request, all, again.Evaluations, again.NotApplicableCount, true, Objective.Name);
+            return new SizeSelection(request, all, again.Evaluations, again.NotApplicableCount, true, Objective.Name, again.MethodFailures, again.FirstFailure);
         }
-        return new SizeSelection(request, found, run.Evaluations, run.NotApplicableCount, false, Objective.Name);
+        return new SizeSelection(request, found, run.Evaluations, run.NotApplicableCount, false, Objective.Name, run.MethodFailures, run.FirstFailure);
     }
 
     /// <summary>Sizes one member by evaluating every section for every case (the brute-force reference).</summary>
@@ -87,7 +90,7 @@ public sealed class SizeSelector
         ArgumentNullException.ThrowIfNull(request);
         var run = new Run(this, request);
         var all = run.Exhaustive();
-        return new SizeSelection(request, all, run.Evaluations, run.NotApplicableCount, false, Objective.Name);
+        return new SizeSelection(request, all, run.Evaluations, run.NotApplicableCount, false, Objective.Name, run.MethodFailures, run.FirstFailure);
     }
 
     /// <summary>Sizes many members across cores (pruned search), results in input order.</summary>
@@ -199,7 +202,8 @@ public sealed class SizeSelector
             {
                 if (!_s.Method.AppliesTo(rm, _cases[c]).IsApplicable) { st = NotApplicable; break; }
                 Evaluations++;
-                if (!Check.Evaluate(rm, _cases[c], _s.Method, null).Passed) { st = Fail; break; }
+                if (!TryEvaluate(rm, c, i, out var r)) { st = NotApplicable; break; }
+                if (!r.Passed) { st = Fail; break; }
             }
             if (st == NotApplicable) NotApplicableCount++;
             return _state[i] = st;
@@ -217,12 +221,33 @@ public sealed class SizeSelector
             {
                 if (!_s.Method.AppliesTo(rm, _cases[c]).IsApplicable) { _state[i] = NotApplicable; return null; }
                 Evaluations++;
-                var r = Check.Evaluate(rm, _cases[c], _s.Method, null);
+                if (!TryEvaluate(rm, c, i, out var r)) { _state[i] = NotApplicable; return null; }
                 if (r.Utilisation > worst) { worst = r.Utilisation; governing = r.Actions.Name; resistance = r.DesignResistanceN; }
             }
             if (!(worst <= 1.0)) { _state[i] = Fail; return null; }
             _state[i] = Pass;
             return _verified[i] = new SizingCandidate(entry, i, _plan.Key[i], worst, governing, resistance);
+        }
+
+        internal int MethodFailures;
+        internal string? FirstFailure;
+
+        /// <summary>The real check; a method that throws for a section (a defect of the method, not of the input) makes
+        /// that section ineligible and is counted and reported, rather than aborting the whole selection.</summary>
+        private bool TryEvaluate(in ResolvedMember rm, int c, int i, out CheckResult result)
+        {
+            try
+            {
+                result = Check.Evaluate(rm, _cases[c], _s.Method, null);
+                return true;
+            }
+            catch (Exception ex) when (ex is not OperationCanceledException)
+            {
+                if (MethodFailures++ == 0)
+                    FirstFailure = $"{_s.Method.Identity.Name} failed for \"{_s.Catalogue.Entries[i].Designation}\" ({_request.Cases[c].Name}): {ex.GetType().Name}: {ex.Message}";
+                result = default;
+                return false;
+            }
         }
 
         internal SizingCandidate[] Exhaustive()
