@@ -84,3 +84,35 @@ public class WorkflowBenchmarks
         return found;
     }
 }
+
+/// <summary>A member schedule of 10,000 invented rows (the boathouse rows repeated) checked on one core and on two:
+/// the speed-up of <see cref="BatchEvaluator"/>. The set-up proves the two results CSVs are byte for byte equal.</summary>
+[MemoryDiagnoser]
+public class ScheduleBatchBenchmarks
+{
+    private CompressionMembers.Workflows.Schedules.MemberSchedule _schedule = null!;
+
+    [GlobalSetup]
+    public void Setup()
+    {
+        var sb = new System.Text.StringBuilder("member,case,material,section,method,length_mm,N_kN,ey_mm\n");
+        var rnd = new Random(6);
+        string[] rows =
+        [
+            "generic-steel,CHS 76x3,johnson", "generic-steel,I 150x150x9x6,perry-robertson", "generic-steel,rect 60x100,euler",
+            "GL28h,glulam 140x180,ec5-column", "6082-T6,CHS 60x4,ec9",
+        ];
+        for (int i = 0; i < 10_000; i++)
+            sb.Append(System.Globalization.CultureInfo.InvariantCulture, $"M{i},ULS,{rows[i % rows.Length]},{1500 + rnd.Next(3000)},{10 + rnd.Next(200)},\n");
+        _schedule = CompressionMembers.Workflows.Schedules.MemberSchedule.ReadCsv(new System.IO.StringReader(sb.ToString()), "bench");
+        string one = CompressionMembers.Workflows.Schedules.ScheduleChecker.Check(_schedule, BatchOptions.Serial).ToCsv();
+        string two = CompressionMembers.Workflows.Schedules.ScheduleChecker.Check(_schedule, new BatchOptions(2)).ToCsv();
+        if (one != two) throw new InvalidOperationException("Serial and parallel schedule results differ.");
+    }
+
+    [Benchmark(Baseline = true)]
+    public int OneCore() => CompressionMembers.Workflows.Schedules.ScheduleChecker.Check(_schedule, BatchOptions.Serial).PassedCount;
+
+    [Benchmark]
+    public int TwoCores() => CompressionMembers.Workflows.Schedules.ScheduleChecker.Check(_schedule, new BatchOptions(2)).PassedCount;
+}

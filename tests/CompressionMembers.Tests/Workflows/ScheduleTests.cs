@@ -45,6 +45,18 @@ public class ScheduleTests
     }
 
     [Fact]
+    public void Check_Boathouse_JettyPostMatchesHandCalculation()
+    {
+        var p1 = ScheduleChecker.Check(Boathouse()).Rows[0].Result!.Value;
+        // Johnson parabola (Shigley, column formulas; from memory), CHS 76 × 3, L = 3.2 m, E = 200 GPa, fy = 250 MPa:
+        double a = System.Math.PI / 4 * (76.0 * 76 - 70.0 * 70) * 1e-6, i = System.Math.PI / 64 * (System.Math.Pow(76, 4) - System.Math.Pow(70, 4)) * 1e-12;
+        double lam = 3.2 / System.Math.Sqrt(i / a); // 123.9 < λc = π √(2E/f) = 125.7: Johnson governs
+        double nrd = a * 250e6 * (1 - 250e6 * lam * lam / (4 * System.Math.PI * System.Math.PI * 200e9));
+        CompressionMembers.Tests.Support.Near.Relative(nrd, p1.DesignResistanceN, 1e-9, "hand calculation, Johnson parabola");
+        CompressionMembers.Tests.Support.Near.Relative(85e3 / nrd, p1.Utilisation, 1e-9, "NEd / NRd by hand");
+    }
+
+    [Fact]
     public void WriteCsv_SerialAndParallel_AreByteForByteEqual()
     {
         var s = Boathouse();
