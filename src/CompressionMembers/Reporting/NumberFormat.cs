@@ -23,6 +23,8 @@ public static class NumberFormat
         if (double.IsNegativeInfinity(value)) return "−∞";
         if (value == 0) return "0";
         double a = Math.Abs(value);
+        // Whole numbers (a section class, a count, K = 1) are written without decimals.
+        if (a < 1e6 && value == Math.Round(value)) return (value < 0 ? "−" : "") + Group(a.ToString("F0", Inv));
         string sign = value < 0 ? "−" : "";
         if (a >= 1e6 || a < 1e-3)
         {
@@ -43,10 +45,14 @@ public static class NumberFormat
     /// <returns>Number and unit, such as "245.7 kN".</returns>
     public static string Quantity(double siValue, StepUnit unit) => unit switch
     {
-        StepUnit.None => Number(siValue),
+        StepUnit.None => Number(Chop(siValue)),
         StepUnit.Boolean => siValue != 0 ? "yes" : "no",
-        _ => Number(siValue * Scale(unit)) + " " + UnitText(unit),
+        _ => Number(Chop(siValue * Scale(unit))) + " " + UnitText(unit),
     };
+
+    // A display value below 1e-9 (in mm, kN, MPa …) is rounding noise of a quantity that is zero by symmetry,
+    // such as the shear-centre offset of an equal angle across its axis of symmetry: show it as 0.
+    private static double Chop(double displayValue) => Math.Abs(displayValue) < 1e-9 ? 0 : displayValue;
 
     /// <summary>The factor from SI to the display unit.</summary>
     internal static double Scale(StepUnit unit) => unit switch

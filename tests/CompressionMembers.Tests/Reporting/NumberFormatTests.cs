@@ -8,7 +8,9 @@ public class NumberFormatTests
     [Theory]
     [InlineData(0.0, "0")]
     [InlineData(0.699155, "0.6992")]
-    [InlineData(1.0, "1.000")]
+    [InlineData(1.0, "1")]
+    [InlineData(4.0, "4")]
+    [InlineData(1.0000001, "1.000")]
     [InlineData(245.67, "245.7")]
     [InlineData(3200.0, "3200")]
     [InlineData(200000.0, "200 000")]
@@ -20,9 +22,10 @@ public class NumberFormatTests
 
     [Theory]
     [InlineData(91360.0, StepUnit.Force, "91.36 kN")]
-    [InlineData(250e6, StepUnit.Stress, "250.0 MPa")]
-    [InlineData(0.839, StepUnit.Length, "839.0 mm")]
-    [InlineData(475e-6, StepUnit.Area, "475.0 mm²")]
-    [InlineData(1800.0, StepUnit.Time, "30.00 min")]
+    [InlineData(250e6, StepUnit.Stress, "250 MPa")]
+    [InlineData(0.839, StepUnit.Length, "839 mm")]
+    [InlineData(475e-6, StepUnit.Area, "475 mm²")]
+    [InlineData(1800.0, StepUnit.Time, "30 min")]
+    [InlineData(-3.469e-18, StepUnit.Length, "0 mm")]
     public void Quantity_InDisplayUnits(double si, StepUnit unit, string expected) => Assert.Equal(expected, NumberFormat.Quantity(si, unit));
 }

@@ -38,12 +38,19 @@ internal static class SecantKernel
         double epsY = Math.Abs(eyM) * cyM / (iyM * iyM), epsZ = Math.Abs(ezM) * czM / (izM * izM);
         double squash = limitPa * aM2;
         if (epsY == 0 && epsZ == 0) { evaluations = 0; return Math.Min(squash, upperN); }
-        double hi = Math.Min(squash / (1 + epsY + epsZ), upperN);
+        // Just below the Euler load, so that rounding can never put θ past π/2 (where the cosines change sign).
+        double hi = Math.Min(squash / (1 + epsY + epsZ), upperN * (1 - 1e-12));
         double amplified = s.Amplified(hi);
         double lo = double.IsFinite(amplified) ? squash / (1 + amplified) : 0;
         if (lo > 0 && hi - lo <= 1e-12 * lo) { evaluations = s.Count; return 0.5 * (lo + hi); }
         double accuracy = lo > 0 ? 5e-11 * lo : 1e-12 * hi;
-        double root = Brent.FindRoot(g, lo, hi, accuracy, 100);
+        if (!Brent.TryFindRoot(g, lo, hi, accuracy, 100, out double root))
+        {
+            // Not expected (G changes sign on [lo, hi] by construction); bisection on the same bracket is the safe fallback.
+            if (!(g(lo) < 0 && g(hi) > 0))
+                throw new InvalidOperationException("The secant formula's root could not be bracketed; please report the member and actions.");
+            root = Bisection.FindRoot(g, lo, hi, accuracy, 400);
+        }
         evaluations = s.Count;
         return root;
     }
@@ -73,8 +80,8 @@ internal static class SecantKernel
         internal double Smooth(double p)
         {
             Count++;
-            double cy = _ey == 0 ? 1 : Math.Cos(_ly / (2 * _iy) * Math.Sqrt(p / (_e * _a)));
-            double cz = _ez == 0 ? 1 : Math.Cos(_lz / (2 * _iz) * Math.Sqrt(p / (_e * _a)));
+            double cy = _ey == 0 ? 1 : Math.Max(0, Math.Cos(_ly / (2 * _iy) * Math.Sqrt(p / (_e * _a))));
+            double cz = _ez == 0 ? 1 : Math.Max(0, Math.Cos(_lz / (2 * _iz) * Math.Sqrt(p / (_e * _a))));
             double epsY = Math.Abs(_ey) * _cy / (_iy * _iy), epsZ = Math.Abs(_ez) * _cz / (_iz * _iz);
             double s = p / _a;
             return (s - _limit) * cy * cz + s * (epsY * cz + epsZ * cy);

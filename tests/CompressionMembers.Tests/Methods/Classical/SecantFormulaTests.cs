@@ -112,6 +112,20 @@ public class SecantFormulaTests
             }
     }
 
+    [Theory]
+    [InlineData(127, 127, 4420)]   // a square bar whose two Euler loads coincide: the bracket end sat on θ = π/2
+    [InlineData(50.8, 50.8, 3632)]
+    public void Evaluate_SquareSectionBiaxialEccentricity_FindsTheRoot(double b, double h, double l)
+    {
+        // Regression: rounding put θ just past π/2 at the Euler load, both cosines turned negative and the bracket
+        // lost its sign change (MathNet threw NonConvergenceException). The capacity must satisfy σmax = f.
+        var member = Fixtures.PinnedBar(b, h, l);
+        var r = Check.Evaluate(member, DesignActions.Compression(Force.FromKilonewtons(5)).WithEccentricity(Mm(5.08), Mm(2.54)), ResistanceMethods.Secant);
+        double a = b * h * 1e-6, i = b / 1000 / Math.Sqrt(12), c = b / 2000;
+        double s = SecantKernel.MaxStress(r.DesignResistanceN, a, 200e9, 0.00508, c, i, l / 1000, 0.00254, c, i, l / 1000);
+        Near.Relative(250e6, s, 1e-9, "σmax = f at the capacity (definition of the secant capacity)");
+    }
+
     [Fact]
     public void Evaluate_SmallEccentricity_TendsToTheConcentricCapacity()
     {
