@@ -66,6 +66,19 @@ public class ReproducibilityTests(ITestOutputHelper output)
     }
 
     [Fact]
+    public void ReportSource_WritesNoPlatformLineEnd()
+    {
+        // Reports end lines with '\n' on every platform: AppendLine and Environment.NewLine would give "\r\n" on Windows.
+        var src = Path.Combine(RepoRoot(), "src", "CompressionMembers");
+        foreach (var file in Directory.EnumerateFiles(src, "*.cs", SearchOption.AllDirectories))
+            foreach (var line in File.ReadLines(file))
+                if (!line.TrimStart().StartsWith("//", StringComparison.Ordinal))
+                    Assert.False(line.Contains("AppendLine(", StringComparison.Ordinal) || line.Contains("NewLine", StringComparison.Ordinal) || line.Contains("\\r", StringComparison.Ordinal),
+                        $"{Path.GetFileName(file)}: {line.Trim()}");
+        Assert.DoesNotContain('\r', TrustCases.RenderAll());
+    }
+
+    [Fact]
     public void LibrarySource_UsesNoClockTimeZoneRandomOrCurrentCultureApi()
     {
         // By construction: a report cannot depend on the time, the zone, the machine or the culture if the library never
