@@ -120,10 +120,10 @@ public sealed class Eurocode9Compression : IResistanceMethod
         if (!Ec9Section.Supports(section.Kind))
             return Applicability.NotApplicable(
                 $"EN 1999-1-1 classification needs the flat parts of the section, which a {section.Kind} section does not give; use an I, channel, angle, tee, box or round tube, or a solid bar.");
-        Span<Ec9Plate> plates = stackalloc Ec9Plate[Ec9Section.MaxPlates];
         bool welded = Welding.Location == WeldLocation.Longitudinal;
-        var c = Ec9Section.Classify(section, plates, member.StrengthPa, alloy.BucklingClass, welded);
-        if (!alloy.CoversThicknessM(c.MinThicknessM) || !alloy.CoversThicknessM(c.MaxThicknessM))
+        var entry = Ec9ClassificationCache.Get(section, alloy, welded);   // classified once per section, alloy and welding
+        ref readonly var c = ref entry.Result;
+        if (!entry.ThicknessCovered)
             return Applicability.NotApplicable(
                 $"the section's thickness ({Guard.Show(c.MinThicknessM * 1e3)}–{Guard.Show(c.MaxThicknessM * 1e3)} mm) is outside the range {Guard.Show(alloy.MinimumThickness.Millimeters)}–{Guard.Show(alloy.MaximumThickness.Millimeters)} mm for which the values of {alloy.Name} hold; use the alloy values for that thickness.");
         if (IsOpenForTorsion(section.Kind) && !member.HasTorsionalProperties)
@@ -153,15 +153,15 @@ public sealed class Eurocode9Compression : IResistanceMethod
         var alloy = (AluminiumAlloy)member.Member.Material;
         var section = member.Member.Section;
         var cls = alloy.BucklingClass;
-        double f0 = member.StrengthPa, fu = alloy.UltimateStrength.Pascals, e = member.ElasticModulusPa, g = member.ShearModulusPa, a = member.AreaM2;
-        double gm1 = PartialFactorM1, gm2 = PartialFactorM2;
         var loc = Welding.Location;
         bool longitudinal = loc == WeldLocation.Longitudinal;
+        // The classification (and fu in Pa) comes from the per-section cache, the same entry AppliesTo read.
+        var entry = Ec9ClassificationCache.Get(section, alloy, longitudinal);
+        ref readonly var c = ref entry.Result;
+        var plates = entry.Plates;
+        double f0 = member.StrengthPa, fu = entry.UltimateStrengthPa, e = member.ElasticModulusPa, g = member.ShearModulusPa, a = member.AreaM2;
+        double gm1 = PartialFactorM1, gm2 = PartialFactorM2;
         double rhoOHaz = alloy.HazProofFactor(Welding.Process), rhoUHaz = alloy.HazUltimateFactor(Welding.Process);
-        double eps = Ec9Rules.Epsilon(f0);
-
-        Span<Ec9Plate> plates = stackalloc Ec9Plate[Ec9Section.MaxPlates];
-        var c = Ec9Section.Classify(section, plates, f0, cls, longitudinal);
         double aEff = c.AreaEffM2;
 
         if (trace is not null)
@@ -173,6 +173,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
             trace.Note(cls == BucklingClass.A ? "Buckling class A (heat-treated alloy)." : "Buckling class B.", RefTable32);
             trace.Note("Welding: " + Welding.Description + ".", RefHaz);
             TraceCommon.SectionAndLengths(trace, member);
+            double eps = Ec9Rules.Epsilon(f0);
             trace.Add("ε", "material factor", "√(250 MPa / f0)", eps, StepUnit.None, RefClass);
             ClassificationSteps(trace, c, plates, eps, cls, longitudinal);
         }
@@ -361,7 +362,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         return nRd;
     }
 
-    private static void ClassificationSteps(CalculationTrace t, in Ec9Classified c, Span<Ec9Plate> p, double eps, BucklingClass cls, bool welded)
+    private static void ClassificationSteps(CalculationTrace t, in Ec9Classified c, ReadOnlySpan<Ec9Plate> p, double eps, BucklingClass cls, bool welded)
     {
         if (c.IsSolid)
         {
@@ -381,7 +382,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         }
         for (int i = 0; i < c.Count; i++)
         {
-            ref var pl = ref p[i];
+            ref readonly var pl = ref p[i];
             string name = Ec9Section.PartName(pl.Part) + " " + (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture);
             Ec9Rules.ClassLimits(cls, welded, pl.Outstand, out double b1, out double b2, out double b3);
             t.Add("b/t", name + (pl.Outstand ? " (outstand)" : " (internal)") + ", β = b / t under uniform compression",
