@@ -210,20 +210,53 @@ public static class BatchKernels
 
     private static void AllPositive(ReadOnlySpan<double> values, string paramName, string unit, string what)
     {
-        for (int i = 0; i < values.Length; i++)
+        // Vector lanes first (NaN fails both comparisons); the scalar scan finds the offending index and the remainder.
+        if (!AllInRange(values, strictlyPositive: true))
         {
-            double v = values[i];
-            if (!(v > 0) || !double.IsFinite(v)) ThrowBad(v, i, paramName, unit, what, "a finite number greater than 0");
+            for (int i = 0; i < values.Length; i++)
+            {
+                double v = values[i];
+                if (!(v > 0) || !double.IsFinite(v)) ThrowBad(v, i, paramName, unit, what, "a finite number greater than 0");
+            }
         }
     }
 
     private static void AllNonNegative(ReadOnlySpan<double> values, string paramName, string what)
     {
-        for (int i = 0; i < values.Length; i++)
+        if (!AllInRange(values, strictlyPositive: false))
+        {
+            for (int i = 0; i < values.Length; i++)
+            {
+                double v = values[i];
+                if (!(v >= 0) || !double.IsFinite(v)) ThrowBad(v, i, paramName, "", what, "a finite number not less than 0");
+            }
+        }
+    }
+
+    /// <summary>Whether every value is finite and &gt; 0 (or ≥ 0): vector lanes, then the scalar remainder.</summary>
+    private static bool AllInRange(ReadOnlySpan<double> values, bool strictlyPositive)
+    {
+        int n = values.Length, i = 0;
+        if (Vector.IsHardwareAccelerated && n >= Vector<double>.Count)
+        {
+            var zero = Vector<double>.Zero;
+            var inf = new Vector<double>(double.PositiveInfinity);
+            var ok = Vector<long>.AllBitsSet;
+            ref double r = ref MemoryMarshal.GetReference(values);
+            for (; i <= n - Vector<double>.Count; i += Vector<double>.Count)
+            {
+                var v = Load(ref r, i);
+                var low = strictlyPositive ? Vector.GreaterThan(v, zero) : Vector.GreaterThanOrEqual(v, zero);
+                ok &= low & Vector.LessThan(v, inf);
+            }
+            if (!Vector.EqualsAll(ok, Vector<long>.AllBitsSet)) return false;
+        }
+        for (; i < n; i++)
         {
             double v = values[i];
-            if (!(v >= 0) || !double.IsFinite(v)) ThrowBad(v, i, paramName, "", what, "a finite number not less than 0");
+            if (!(strictlyPositive ? v > 0 : v >= 0) || !(v < double.PositiveInfinity)) return false;
         }
+        return true;
     }
 
     private static void ThrowBad(double v, int index, string paramName, string unit, string what, string rule) =>
