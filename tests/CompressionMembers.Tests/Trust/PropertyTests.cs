@@ -182,6 +182,28 @@ public class PropertyTests(ITestOutputHelper output)
 
     [Theory]
     [MemberData(nameof(FamilyIndex))]
+    public void Resistance_SameMemberTypedInInches_IsTheSame(int family)
+    {
+        // Every family's member re-typed with its section and length in inches (1 in = 25.4 mm exactly): the check works
+        // in SI, so only conversion rounding may differ (common practice: a result cannot depend on the unit of entry).
+        var f = Families[family];
+        static Length In(Length l) => Length.FromInches(l.Millimeters / 25.4);
+        Run(Gen.Select(Gen.Double[40, 200], Gen.Double[300, 5000]), t =>
+        {
+            var si = f.Make(t.Item1, t.Item2);
+            Section us = si.Section switch
+            {
+                RectangleSection r => new RectangleSection(In(r.Width), In(r.Depth)),
+                RectangularHollowSection h => new RectangularHollowSection(In(h.Width), In(h.Depth), In(h.WallThickness)),
+                _ => throw new InvalidOperationException("unexpected section"),
+            };
+            var inch = Member.Create(us, si.Material, In(si.Length), si.Restraint, si.Name);
+            Near.Relative(N(si, f.Method), N(inch, f.Method), 1e-9, $"{f.Name}: unit invariance (common practice)");
+        });
+    }
+
+    [Theory]
+    [MemberData(nameof(FamilyIndex))]
     public void Resistance_RectangleTurnedThroughNinetyDegrees_ChangesOnlyTheAxisLabel(int family)
     {
         // A b × h rectangle and the same rectangle h × b (axes y and z swapped) under pinned ends on both axes: the same
