@@ -129,6 +129,35 @@ public class PropertyTests(ITestOutputHelper output)
         });
     }
 
+    [Theory]
+    [MemberData(nameof(FamilyIndex))]
+    public void Check_AnySizeLengthAndLoadOverManyDecades_IsFiniteOrRefusedTyped(int family)
+    {
+        // Sizes 1 mm to 10 m, lengths 1 mm to 1 km, loads 1 N to 1 GN, drawn log-uniformly: every check either gives a
+        // finite, non-negative resistance with a utilisation that is not NaN, or refuses with an ArgumentException
+        // (MethodNotApplicableException included). An InvalidOperationException would be a method returning NaN.
+        var f = Families[family];
+        Run(Gen.Select(Gen.Double[0, 4], Gen.Double[0, 6], Gen.Double[0, 9]), t =>
+        {
+            double size = Math.Pow(10, t.Item1), length = Math.Pow(10, t.Item2), load = Math.Pow(10, t.Item3);
+            Member m;
+            try { m = f.Make(size, length); }
+            catch (ArgumentException) { return; }
+            var a = DesignActions.Compression(Force.FromNewtons(load)).WithLoadDuration(LoadDurationClass.MediumTerm);
+            try
+            {
+                var r = Check.Evaluate(m, a, f.Method);
+                if (!(double.IsFinite(r.DesignResistanceN) && r.DesignResistanceN >= 0) || double.IsNaN(r.Utilisation))
+                    throw new Xunit.Sdk.XunitException($"{f.Name}: size {size:R} mm, L {length:R} mm, N {load:R} N: resistance {r.DesignResistanceN:R}, u {r.Utilisation:R}");
+            }
+            catch (ArgumentException) { }
+            catch (InvalidOperationException e)
+            {
+                throw new Xunit.Sdk.XunitException($"{f.Name}: size {size:R} mm, L {length:R} mm, N {load:R} N: {e.Message}");
+            }
+        });
+    }
+
     [Fact]
     public void Ec5_SameMemberInInchAndPsi_GivesTheSameResistance()
     {
