@@ -129,6 +129,35 @@ public class PropertyTests(ITestOutputHelper output)
         });
     }
 
+    [Theory]
+    [MemberData(nameof(FamilyIndex))]
+    public void Check_AnySizeLengthAndLoadOverManyDecades_IsFiniteOrRefusedTyped(int family)
+    {
+        // Sizes 1 mm to 10 m, lengths 1 mm to 1 km, loads 1 N to 1 GN, drawn log-uniformly: every check either gives a
+        // finite, non-negative resistance with a utilisation that is not NaN, or refuses with an ArgumentException
+        // (MethodNotApplicableException included). An InvalidOperationException would be a method returning NaN.
+        var f = Families[family];
+        Run(Gen.Select(Gen.Double[0, 4], Gen.Double[0, 6], Gen.Double[0, 9]), t =>
+        {
+            double size = Math.Pow(10, t.Item1), length = Math.Pow(10, t.Item2), load = Math.Pow(10, t.Item3);
+            Member m;
+            try { m = f.Make(size, length); }
+            catch (ArgumentException) { return; }
+            var a = DesignActions.Compression(Force.FromNewtons(load)).WithLoadDuration(LoadDurationClass.MediumTerm);
+            try
+            {
+                var r = Check.Evaluate(m, a, f.Method);
+                if (!(double.IsFinite(r.DesignResistanceN) && r.DesignResistanceN >= 0) || double.IsNaN(r.Utilisation))
+                    throw new Xunit.Sdk.XunitException($"{f.Name}: size {size:R} mm, L {length:R} mm, N {load:R} N: resistance {r.DesignResistanceN:R}, u {r.Utilisation:R}");
+            }
+            catch (ArgumentException) { }
+            catch (InvalidOperationException e)
+            {
+                throw new Xunit.Sdk.XunitException($"{f.Name}: size {size:R} mm, L {length:R} mm, N {load:R} N: {e.Message}");
+            }
+        });
+    }
+
     [Fact]
     public void Ec5_SameMemberInInchAndPsi_GivesTheSameResistance()
     {
@@ -177,6 +206,28 @@ public class PropertyTests(ITestOutputHelper output)
             Near.Relative(N(si, ResistanceMethods.Eurocode9), N(us, ResistanceMethods.Eurocode9), 1e-9, "unit invariance (common practice)");
             Near.Relative(N(si, ResistanceMethods.FiniteElementCritical), N(us, ResistanceMethods.FiniteElementCritical), 1e-9, "unit invariance (common practice)");
             Near.Relative(N(si, ResistanceMethods.AluminiumBucklingConstantsLrfd), N(us, ResistanceMethods.AluminiumBucklingConstantsLrfd), 1e-9, "unit invariance (common practice)");
+        });
+    }
+
+    [Theory]
+    [MemberData(nameof(FamilyIndex))]
+    public void Resistance_SameMemberTypedInInches_IsTheSame(int family)
+    {
+        // Every family's member re-typed with its section and length in inches (1 in = 25.4 mm exactly): the check works
+        // in SI, so only conversion rounding may differ (common practice: a result cannot depend on the unit of entry).
+        var f = Families[family];
+        static Length In(Length l) => Length.FromInches(l.Millimeters / 25.4);
+        Run(Gen.Select(Gen.Double[40, 200], Gen.Double[300, 5000]), t =>
+        {
+            var si = f.Make(t.Item1, t.Item2);
+            Section us = si.Section switch
+            {
+                RectangleSection r => new RectangleSection(In(r.Width), In(r.Depth)),
+                RectangularHollowSection h => new RectangularHollowSection(In(h.Width), In(h.Depth), In(h.WallThickness)),
+                _ => throw new InvalidOperationException("unexpected section"),
+            };
+            var inch = Member.Create(us, si.Material, In(si.Length), si.Restraint, si.Name);
+            Near.Relative(N(si, f.Method), N(inch, f.Method), 1e-9, $"{f.Name}: unit invariance (common practice)");
         });
     }
 
