@@ -35,7 +35,17 @@ internal static class Si
     internal static double MetersToFourth(AreaMomentOfInertia q, string p, string what, Sign s = Sign.Positive) => Check(q.MetersToTheFourth, q, p, what, s);
     internal static double CubicMeters(Volume q, string p, string what, Sign s = Sign.Positive) => Check(q.CubicMeters, q, p, what, s);
     internal static double Newtons(Force q, string p, string what, Sign s = Sign.Positive) => Check(q.Newtons, q, p, what, s);
-    internal static double Pascals(Pressure q, string p, string what, Sign s = Sign.Positive) => Check(q.Pascals, q, p, what, s);
+    /// <summary>A stress or modulus; above 10 000 GPa it is no property of a structural material (diamond's E is about
+    /// 1 200 GPa) and would overflow the kernels' products, so it is refused.</summary>
+    internal static double Pascals(Pressure q, string p, string what, Sign s = Sign.Positive)
+    {
+        double v = Check(q.Pascals, q, p, what, s);
+        if (Math.Abs(v) > MaxStressPa)
+            throw new ArgumentOutOfRangeException(p, (double)q.Value, $"{what} must be at most 10 000 GPa (no structural material comes near); got {Given(q)}.");
+        return v;
+    }
+
+    internal const double MaxStressPa = 1e13;
     internal static double NewtonMeters(Torque q, string p, string what, Sign s = Sign.Any) => Check(q.NewtonMeters, q, p, what, s);
     internal static double KilogramsPerCubicMeter(Density q, string p, string what, Sign s = Sign.Positive) => Check(q.KilogramsPerCubicMeter, q, p, what, s);
     internal static double Radians(Angle q, string p, string what, Sign s = Sign.Any) => Check(q.Radians, q, p, what, s);

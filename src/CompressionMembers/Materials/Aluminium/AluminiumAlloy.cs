@@ -123,12 +123,18 @@ public sealed class AluminiumAlloy : Material
     /// <summary>ρo,haz for a process.</summary>
     /// <param name="process">The welding process.</param>
     /// <returns>The factor.</returns>
-    public double HazProofFactor(WeldingProcess process) => process == WeldingProcess.Tig ? HazProofFactorTig : HazProofFactorMig;
+    /// <exception cref="System.ArgumentOutOfRangeException">The process is not MIG or TIG.</exception>
+    public double HazProofFactor(WeldingProcess process) => CheckedProcess(process) == WeldingProcess.Tig ? HazProofFactorTig : HazProofFactorMig;
 
     /// <summary>ρu,haz for a process.</summary>
     /// <param name="process">The welding process.</param>
     /// <returns>The factor.</returns>
-    public double HazUltimateFactor(WeldingProcess process) => process == WeldingProcess.Tig ? HazUltimateFactorTig : HazUltimateFactorMig;
+    /// <exception cref="System.ArgumentOutOfRangeException">The process is not MIG or TIG.</exception>
+    public double HazUltimateFactor(WeldingProcess process) => CheckedProcess(process) == WeldingProcess.Tig ? HazUltimateFactorTig : HazUltimateFactorMig;
+
+    private static WeldingProcess CheckedProcess(WeldingProcess process) => System.Enum.IsDefined(process)
+        ? process
+        : throw new System.ArgumentOutOfRangeException(nameof(process), process, $"Unknown welding process {(int)process}; use MIG or TIG.");
 
     /// <summary>Whether a plate thickness lies in the range the values hold for (tmin &lt; t ≤ tmax, or t ≥ 0 when tmin is 0).</summary>
     /// <param name="thickness">The thickness.</param>

@@ -65,7 +65,8 @@ public sealed class AluminiumWelding
     public static AluminiumWelding LongitudinalSeams(WeldingProcess process, int seams, Length plateThickness)
     {
         CheckProcess(process);
-        if (seams < 1) throw new ArgumentOutOfRangeException(nameof(seams), seams, $"Number of weld seams must be at least 1; got {seams}.");
+        if (seams < 1 || seams > 1000)
+            throw new ArgumentOutOfRangeException(nameof(seams), seams, $"Number of weld seams must be between 1 and 1000; got {seams}.");
         double t = Si.Meters(plateThickness, nameof(plateThickness), "Plate thickness");
         double b = HeatAffectedExtentM(process, t, nameof(plateThickness));
         double a = seams * 2 * b * t;

@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials;
 using CompressionMembers.Materials.Aluminium;
@@ -120,10 +121,10 @@ public sealed class Eurocode9Compression : IResistanceMethod
         if (!Ec9Section.Supports(section.Kind))
             return Applicability.NotApplicable(
                 $"EN 1999-1-1 classification needs the flat parts of the section, which a {section.Kind} section does not give; use an I, channel, angle, tee, box or round tube, or a solid bar.");
-        Span<Ec9Plate> plates = stackalloc Ec9Plate[Ec9Section.MaxPlates];
         bool welded = Welding.Location == WeldLocation.Longitudinal;
-        var c = Ec9Section.Classify(section, plates, member.StrengthPa, alloy.BucklingClass, welded);
-        if (!alloy.CoversThicknessM(c.MinThicknessM) || !alloy.CoversThicknessM(c.MaxThicknessM))
+        var entry = Ec9ClassificationCache.Get(section, alloy, welded);   // classified once per section, alloy and welding
+        ref readonly var c = ref entry.Result;
+        if (!entry.ThicknessCovered)
             return Applicability.NotApplicable(
                 $"the section's thickness ({Guard.Show(c.MinThicknessM * 1e3)}–{Guard.Show(c.MaxThicknessM * 1e3)} mm) is outside the range {Guard.Show(alloy.MinimumThickness.Millimeters)}–{Guard.Show(alloy.MaximumThickness.Millimeters)} mm for which the values of {alloy.Name} hold; use the alloy values for that thickness.");
         if (IsOpenForTorsion(section.Kind) && !member.HasTorsionalProperties)
@@ -153,49 +154,29 @@ public sealed class Eurocode9Compression : IResistanceMethod
         var alloy = (AluminiumAlloy)member.Member.Material;
         var section = member.Member.Section;
         var cls = alloy.BucklingClass;
-        double f0 = member.StrengthPa, fu = alloy.UltimateStrength.Pascals, e = member.ElasticModulusPa, g = member.ShearModulusPa, a = member.AreaM2;
-        double gm1 = PartialFactorM1, gm2 = PartialFactorM2;
         var loc = Welding.Location;
         bool longitudinal = loc == WeldLocation.Longitudinal;
+        // The classification (and fu in Pa) comes from the per-section cache, the same entry AppliesTo read.
+        var entry = Ec9ClassificationCache.Get(section, alloy, longitudinal);
+        ref readonly var c = ref entry.Result;
+        var plates = entry.Plates;
+        double f0 = member.StrengthPa, fu = entry.UltimateStrengthPa, e = member.ElasticModulusPa, g = member.ShearModulusPa, a = member.AreaM2;
+        double gm1 = PartialFactorM1, gm2 = PartialFactorM2;
         double rhoOHaz = alloy.HazProofFactor(Welding.Process), rhoUHaz = alloy.HazUltimateFactor(Welding.Process);
-        double eps = Ec9Rules.Epsilon(f0);
-
-        Span<Ec9Plate> plates = stackalloc Ec9Plate[Ec9Section.MaxPlates];
-        var c = Ec9Section.Classify(section, plates, f0, cls, longitudinal);
         double aEff = c.AreaEffM2;
 
-        if (trace is not null)
-        {
-            trace.Add("f0", "0.2 % proof strength", TraceCommon.Input, f0, StepUnit.Stress, alloy.Source);
-            trace.Add("fu", "ultimate strength", TraceCommon.Input, fu, StepUnit.Stress, alloy.Source);
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, "EN 1999-1-1 3.2.5");
-            trace.Add("G", "shear modulus", TraceCommon.Input, g, StepUnit.Stress, "EN 1999-1-1 3.2.5");
-            trace.Note(cls == BucklingClass.A ? "Buckling class A (heat-treated alloy)." : "Buckling class B.", RefTable32);
-            trace.Note("Welding: " + Welding.Description + ".", RefHaz);
-            TraceCommon.SectionAndLengths(trace, member);
-            trace.Add("ε", "material factor", "√(250 MPa / f0)", eps, StepUnit.None, RefClass);
-            ClassificationSteps(trace, c, plates, eps, cls, longitudinal);
-        }
+        // Steps are written by separate methods (cold code) so that the untraced frame stays small; they get the values computed here.
+        if (trace is not null) TraceInputs(trace, member, alloy, c, plates, f0, fu, e, g, cls, longitudinal);
 
         // Longitudinal welds: heat-affected area and the area A1 of κ.
         double aHaz = longitudinal ? Welding.HeatAffectedAreaM2 : 0;
         double a1 = a - aHaz * (1 - rhoOHaz);
         double aEffHaz = aEff - aHaz * (1 - rhoOHaz); // local and HAZ reductions together (a conservative overlap)
-        if (trace is not null && longitudinal)
-        {
-            trace.Add("ρo,haz", "HAZ factor on f0 (" + (Welding.Process == WeldingProcess.Tig ? "TIG" : "MIG") + ")", "fo,haz / f0", rhoOHaz, StepUnit.None, RefTable32);
-            trace.Add("Ahaz", "heat-affected area of the longitudinal welds", Welding.Description, aHaz, StepUnit.Area, "EN 1999-1-1 6.1.6.3");
-            trace.Add("A1", "area for κ", "A − Ahaz (1 − ρo,haz)", a1, StepUnit.Area, RefKappa);
-            trace.Add("Aeff,haz", "effective area with local buckling and HAZ", "Aeff − Ahaz (1 − ρo,haz)", aEffHaz, StepUnit.Area, RefHaz);
-        }
+        if (trace is not null && longitudinal) TraceLongitudinal(trace, rhoOHaz, aHaz, a1, aEffHaz);
 
         // Flexural buckling about y and z.
         Ec9Rules.FlexuralCurve(cls, out double alphaF, out double lam0F);
-        if (trace is not null)
-        {
-            trace.Add("α", "imperfection factor, flexural buckling (class " + (cls == BucklingClass.A ? "A" : "B") + ")", "Table 6.6", alphaF, StepUnit.None, RefCurve);
-            trace.Add("λ̄0", "limit of the plateau, flexural buckling", "Table 6.6", lam0F, StepUnit.None, RefCurve);
-        }
+        if (trace is not null) TraceCurve(trace, cls, alphaF, lam0F);
         var y = new AxisData(member, BucklingAxis.Y);
         var z = new AxisData(member, BucklingAxis.Z);
         double nRdY = Flexural(trace, y, aEff, f0, alphaF, lam0F, cls, longitudinal, a1 / a, gm1, out double lamY, out double chiY, out double kapY);
@@ -216,15 +197,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         {
             double nu = rhoUHaz * a * fu / gm2, no = rhoOHaz * aEff * f0 / gm1;
             nRdSec = Math.Min(nu, no);
-            if (trace is not null)
-            {
-                trace.Note("Transverse welds at the ends: the whole end section is heat-affected; buckling uses the unwelded member (κ = 1).", RefSection);
-                trace.Add("ρo,haz", "HAZ factor on f0", "fo,haz / f0", rhoOHaz, StepUnit.None, RefTable32);
-                trace.Add("ρu,haz", "HAZ factor on fu", "fu,haz / fu", rhoUHaz, StepUnit.None, RefTable32);
-                trace.Add("Nu,Rd", "ultimate resistance of the welded end section", "ρu,haz A fu / γM2", nu, StepUnit.Force, RefSection);
-                trace.Add("No,Rd", "proof resistance of the welded end section", "ρo,haz Aeff f0 / γM1", no, StepUnit.Force, RefSection);
-                trace.Add("Nc,Rd,haz", "resistance of the welded end section", "min(Nu,Rd, No,Rd)", nRdSec, StepUnit.Force, RefSection);
-            }
+            if (trace is not null) TraceEndSection(trace, rhoOHaz, rhoUHaz, nu, no, nRdSec);
         }
         else if (longitudinal)
         {
@@ -242,50 +215,11 @@ public sealed class Eurocode9Compression : IResistanceMethod
 
         double nEd = actions.AxialForceN;
         double u = nEd / nRd;
-        if (trace is not null)
-        {
-            trace.Add("NRd", "design buckling resistance (governing mode)", "min of the modes above", nRd, StepUnit.Force, RefNRd);
-            trace.Note("Governing: " + check + ".", RefNRd);
-            trace.Add("NEd", "design axial compression", TraceCommon.Input, nEd, StepUnit.Force, "actions");
-            trace.Add("NEd / NRd", "axial utilisation", "NEd / NRd", u, StepUnit.None, RefNRd);
-        }
+        if (trace is not null) TraceAxial(trace, nRd, check, nEd, u);
 
-        // Compression with bending.
+        // Compression with bending (cold for pure compression: its own method).
         if (actions.HasEccentricity || actions.HasEndMoments)
-        {
-            double my = nEd * Math.Abs(actions.EccentricityYM) + Math.Max(Math.Abs(actions.EndMomentYTopNm), Math.Abs(actions.EndMomentYBottomNm));
-            double mz = nEd * Math.Abs(actions.EccentricityZM) + Math.Max(Math.Abs(actions.EndMomentZTopNm), Math.Abs(actions.EndMomentZBottomNm));
-            double wy = member.SecondMomentYM4 / Math.Max(member.FibrePositiveZM, member.FibreNegativeZM);
-            double wz = member.SecondMomentZM4 / Math.Max(member.FibrePositiveYM, member.FibreNegativeYM);
-            double mRdY = wy * f0 / gm1, mRdZ = wz * f0 / gm1;
-            double nbZ = Math.Min(nRdZ, nRdT), nbMin = Math.Min(nRdY, nbZ);
-            double uy = Math.Pow(nEd / nRdY, XiYc) + my / mRdY;
-            double uz = Math.Pow(nEd / nbZ, EtaC) + Math.Pow(mz / mRdZ, XiZc);
-            bool both = my > 0 && mz > 0;
-            double uyz = both ? Math.Pow(nEd / nbMin, EtaC) + my / mRdY + Math.Pow(mz / mRdZ, XiZc) : 0;
-            if (trace is not null)
-            {
-                trace.Note("First-order moment at the governing section: N·e + max |M_end| about each axis; ω0 = ωx = 1 (no localised welds or holes).", RefInter);
-                trace.Add("My,Ed", "design moment about y", "NEd |ey| + max |My,end|", my, StepUnit.Moment, RefInter);
-                trace.Add("Mz,Ed", "design moment about z", "NEd |ez| + max |Mz,end|", mz, StepUnit.Moment, RefInter);
-                trace.Add("Wel,y", "elastic section modulus about y", "Iy / max(z+, z−)", wy, StepUnit.SectionModulus, "section");
-                trace.Add("Wel,z", "elastic section modulus about z", "Iz / max(y+, y−)", wz, StepUnit.SectionModulus, "section");
-                trace.Add("My,Rd", "bending resistance about y", "Wel,y f0 / γM1", mRdY, StepUnit.Moment, "EN 1999-1-1 6.2.5");
-                trace.Add("Mz,Rd", "bending resistance about z", "Wel,z f0 / γM1", mRdZ, StepUnit.Moment, "EN 1999-1-1 6.2.5");
-                trace.Add("ξyc", "exponent of the axial term, bending about y", "6.3.3", XiYc, StepUnit.None, RefInter);
-                trace.Add("ηc", "exponent of the axial term, bending about z", "6.3.3", EtaC, StepUnit.None, RefInter);
-                trace.Add("ξzc", "exponent of the moment term about z", "6.3.3", XiZc, StepUnit.None, RefInter);
-                trace.Add("uy", "interaction, bending about y", "(NEd / Nb,y,Rd)^ξyc + My,Ed / My,Rd", uy, StepUnit.None, RefInter);
-                trace.Add("uz", "interaction, bending about z", "(NEd / min(Nb,z,Rd, NT,Rd))^ηc + (Mz,Ed / Mz,Rd)^ξzc", uz, StepUnit.None, RefInter);
-                if (both)
-                    trace.Add("uyz", "interaction, biaxial bending", "(NEd / Nb,min,Rd)^ηc + My,Ed / My,Rd + (Mz,Ed / Mz,Rd)^ξzc", uyz, StepUnit.None, RefInter);
-            }
-            double ub = uy; var axisB = BucklingAxis.Y; string checkB = CheckBendY;
-            if (uz > ub) { ub = uz; axisB = BucklingAxis.Z; checkB = CheckBendZ; }
-            if (uyz > ub) { ub = uyz; axisB = BucklingAxis.Both; checkB = CheckBendYz; }
-            if (ub > u) { u = ub; axis = axisB; mode = FailureMode.CombinedCompressionAndBending; check = checkB; }
-            trace?.Note("Governing: " + check + ".", RefInter);
-        }
+            Bending(trace, member, actions, nEd, nRdY, nRdZ, nRdT, f0, gm1, ref u, ref axis, ref mode, ref check);
         trace?.Add("u", "utilisation", "governing value", u, StepUnit.None, Std);
 
         var tOut = torsion ? new AxisOutcome(member.EffectiveLengthTorsionalM, double.NaN, lamT, nCrT, chiT, nRdT) : default;
@@ -295,6 +229,95 @@ public sealed class Eurocode9Compression : IResistanceMethod
             tOut, trace);
     }
 
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void TraceInputs(CalculationTrace trace, in ResolvedMember member, AluminiumAlloy alloy, in Ec9Classified c, ReadOnlySpan<Ec9Plate> plates,
+        double f0, double fu, double e, double g, BucklingClass cls, bool longitudinal)
+    {
+        trace.Add("f0", "0.2 % proof strength", TraceCommon.Input, f0, StepUnit.Stress, alloy.Source);
+        trace.Add("fu", "ultimate strength", TraceCommon.Input, fu, StepUnit.Stress, alloy.Source);
+        trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, "EN 1999-1-1 3.2.5");
+        trace.Add("G", "shear modulus", TraceCommon.Input, g, StepUnit.Stress, "EN 1999-1-1 3.2.5");
+        trace.Note(cls == BucklingClass.A ? "Buckling class A (heat-treated alloy)." : "Buckling class B.", RefTable32);
+        trace.Note("Welding: " + Welding.Description + ".", RefHaz);
+        TraceCommon.SectionAndLengths(trace, member);
+        double eps = Ec9Rules.Epsilon(f0);
+        trace.Add("ε", "material factor", "√(250 MPa / f0)", eps, StepUnit.None, RefClass);
+        ClassificationSteps(trace, c, plates, eps, cls, longitudinal);
+        }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void TraceLongitudinal(CalculationTrace trace, double rhoOHaz, double aHaz, double a1, double aEffHaz)
+    {
+        trace.Add("ρo,haz", "HAZ factor on f0 (" + (Welding.Process == WeldingProcess.Tig ? "TIG" : "MIG") + ")", "fo,haz / f0", rhoOHaz, StepUnit.None, RefTable32);
+        trace.Add("Ahaz", "heat-affected area of the longitudinal welds", Welding.Description, aHaz, StepUnit.Area, "EN 1999-1-1 6.1.6.3");
+        trace.Add("A1", "area for κ", "A − Ahaz (1 − ρo,haz)", a1, StepUnit.Area, RefKappa);
+        trace.Add("Aeff,haz", "effective area with local buckling and HAZ", "Aeff − Ahaz (1 − ρo,haz)", aEffHaz, StepUnit.Area, RefHaz);
+        }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceCurve(CalculationTrace trace, BucklingClass cls, double alphaF, double lam0F)
+    {
+        trace.Add("α", "imperfection factor, flexural buckling (class " + (cls == BucklingClass.A ? "A" : "B") + ")", "Table 6.6", alphaF, StepUnit.None, RefCurve);
+        trace.Add("λ̄0", "limit of the plateau, flexural buckling", "Table 6.6", lam0F, StepUnit.None, RefCurve);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceEndSection(CalculationTrace trace, double rhoOHaz, double rhoUHaz, double nu, double no, double nRdSec)
+    {
+            trace.Note("Transverse welds at the ends: the whole end section is heat-affected; buckling uses the unwelded member (κ = 1).", RefSection);
+            trace.Add("ρo,haz", "HAZ factor on f0", "fo,haz / f0", rhoOHaz, StepUnit.None, RefTable32);
+            trace.Add("ρu,haz", "HAZ factor on fu", "fu,haz / fu", rhoUHaz, StepUnit.None, RefTable32);
+            trace.Add("Nu,Rd", "ultimate resistance of the welded end section", "ρu,haz A fu / γM2", nu, StepUnit.Force, RefSection);
+            trace.Add("No,Rd", "proof resistance of the welded end section", "ρo,haz Aeff f0 / γM1", no, StepUnit.Force, RefSection);
+            trace.Add("Nc,Rd,haz", "resistance of the welded end section", "min(Nu,Rd, No,Rd)", nRdSec, StepUnit.Force, RefSection);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceAxial(CalculationTrace trace, double nRd, string check, double nEd, double u)
+    {
+        trace.Add("NRd", "design buckling resistance (governing mode)", "min of the modes above", nRd, StepUnit.Force, RefNRd);
+        trace.Note("Governing: " + check + ".", RefNRd);
+        trace.Add("NEd", "design axial compression", TraceCommon.Input, nEd, StepUnit.Force, "actions");
+        trace.Add("NEd / NRd", "axial utilisation", "NEd / NRd", u, StepUnit.None, RefNRd);
+    }
+
+    private static void Bending(CalculationTrace? trace, in ResolvedMember member, in ResolvedActions actions, double nEd, double nRdY, double nRdZ,
+        double nRdT, double f0, double gm1, ref double u, ref BucklingAxis axis, ref FailureMode mode, ref string check)
+    {
+        double my = nEd * Math.Abs(actions.EccentricityYM) + Math.Max(Math.Abs(actions.EndMomentYTopNm), Math.Abs(actions.EndMomentYBottomNm));
+        double mz = nEd * Math.Abs(actions.EccentricityZM) + Math.Max(Math.Abs(actions.EndMomentZTopNm), Math.Abs(actions.EndMomentZBottomNm));
+        double wy = member.SecondMomentYM4 / Math.Max(member.FibrePositiveZM, member.FibreNegativeZM);
+        double wz = member.SecondMomentZM4 / Math.Max(member.FibrePositiveYM, member.FibreNegativeYM);
+        double mRdY = wy * f0 / gm1, mRdZ = wz * f0 / gm1;
+        double nbZ = Math.Min(nRdZ, nRdT), nbMin = Math.Min(nRdY, nbZ);
+        double uy = Math.Pow(nEd / nRdY, XiYc) + my / mRdY;
+        double uz = Math.Pow(nEd / nbZ, EtaC) + Math.Pow(mz / mRdZ, XiZc);
+        bool both = my > 0 && mz > 0;
+        double uyz = both ? Math.Pow(nEd / nbMin, EtaC) + my / mRdY + Math.Pow(mz / mRdZ, XiZc) : 0;
+        if (trace is not null)
+        {
+            trace.Note("First-order moment at the governing section: N·e + max |M_end| about each axis; ω0 = ωx = 1 (no localised welds or holes).", RefInter);
+            trace.Add("My,Ed", "design moment about y", "NEd |ey| + max |My,end|", my, StepUnit.Moment, RefInter);
+            trace.Add("Mz,Ed", "design moment about z", "NEd |ez| + max |Mz,end|", mz, StepUnit.Moment, RefInter);
+            trace.Add("Wel,y", "elastic section modulus about y", "Iy / max(z+, z−)", wy, StepUnit.SectionModulus, "section");
+            trace.Add("Wel,z", "elastic section modulus about z", "Iz / max(y+, y−)", wz, StepUnit.SectionModulus, "section");
+            trace.Add("My,Rd", "bending resistance about y", "Wel,y f0 / γM1", mRdY, StepUnit.Moment, "EN 1999-1-1 6.2.5");
+            trace.Add("Mz,Rd", "bending resistance about z", "Wel,z f0 / γM1", mRdZ, StepUnit.Moment, "EN 1999-1-1 6.2.5");
+            trace.Add("ξyc", "exponent of the axial term, bending about y", "6.3.3", XiYc, StepUnit.None, RefInter);
+            trace.Add("ηc", "exponent of the axial term, bending about z", "6.3.3", EtaC, StepUnit.None, RefInter);
+            trace.Add("ξzc", "exponent of the moment term about z", "6.3.3", XiZc, StepUnit.None, RefInter);
+            trace.Add("uy", "interaction, bending about y", "(NEd / Nb,y,Rd)^ξyc + My,Ed / My,Rd", uy, StepUnit.None, RefInter);
+            trace.Add("uz", "interaction, bending about z", "(NEd / min(Nb,z,Rd, NT,Rd))^ηc + (Mz,Ed / Mz,Rd)^ξzc", uz, StepUnit.None, RefInter);
+            if (both)
+                trace.Add("uyz", "interaction, biaxial bending", "(NEd / Nb,min,Rd)^ηc + My,Ed / My,Rd + (Mz,Ed / Mz,Rd)^ξzc", uyz, StepUnit.None, RefInter);
+        }
+        double ub = uy; var axisB = BucklingAxis.Y; string checkB = CheckBendY;
+        if (uz > ub) { ub = uz; axisB = BucklingAxis.Z; checkB = CheckBendZ; }
+        if (uyz > ub) { ub = uyz; axisB = BucklingAxis.Both; checkB = CheckBendYz; }
+        if (ub > u) { u = ub; axis = axisB; mode = FailureMode.CombinedCompressionAndBending; check = checkB; }
+        trace?.Note("Governing: " + check + ".", RefInter);
+    }
+
     private static double Flexural(CalculationTrace? t, in AxisData ax, double aEff, double f0, double alpha, double lam0, BucklingClass cls,
         bool longitudinal, double a1OverA, double gm1, out double lam, out double chi, out double kappa)
     {
@@ -302,20 +325,24 @@ public sealed class Eurocode9Compression : IResistanceMethod
         chi = Ec9Rules.Chi(lam, alpha, lam0);
         kappa = longitudinal ? Ec9Rules.KappaLongitudinalWeld(cls, lam, a1OverA) : 1;
         double nRd = kappa * chi * aEff * f0 / gm1;
-        if (t is not null)
-        {
-            bool y = ax.Axis == BucklingAxis.Y;
-            string s = ax.Sub;
-            TraceCommon.Slenderness(t, ax, RefFlex);
-            t.Add("λ̄" + s, "relative slenderness about " + s, "√(Aeff f0 / Ncr," + s + ")", lam, StepUnit.None, RefFlex);
-            t.Add("φ" + s, "about " + s, "0.5 [1 + α (λ̄ − λ̄0) + λ̄²]", Ec9Rules.Phi(lam, alpha, lam0), StepUnit.None, RefFlex);
-            t.Add("χ" + s, "reduction factor for flexural buckling about " + s, lam <= lam0 ? "1 (λ̄ ≤ λ̄0)" : "1 / (φ + √(φ² − λ̄²)) ≤ 1", chi, StepUnit.None, RefFlex);
-            t.Add("κ" + s, "factor for the weakening of welding", longitudinal
-                ? (cls == BucklingClass.A ? "1 − (1 − A1/A) 10^(−λ̄) − (0.05 + 0.1 A1/A) λ̄^(1.3(1 − λ̄))" : "1 + 0.04 (4λ̄)^(0.5 − λ̄) − 0.22 λ̄^(1.4(1 − λ̄)) (1 for λ̄ ≤ 0.2)")
-                : "1 (no longitudinal welds)", kappa, StepUnit.None, RefKappa);
-            t.Add(y ? "Nb,y,Rd" : "Nb,z,Rd", "flexural buckling resistance about " + s, "κ χ Aeff f0 / γM1", nRd, StepUnit.Force, RefNRd);
-        }
+        if (t is not null) FlexuralSteps(t, ax, alpha, lam0, cls, longitudinal, lam, chi, kappa, nRd);
         return nRd;
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void FlexuralSteps(CalculationTrace t, in AxisData ax, double alpha, double lam0, BucklingClass cls, bool longitudinal,
+        double lam, double chi, double kappa, double nRd)
+    {
+        bool y = ax.Axis == BucklingAxis.Y;
+        string s = ax.Sub;
+        TraceCommon.Slenderness(t, ax, RefFlex);
+        t.Add("λ̄" + s, "relative slenderness about " + s, "√(Aeff f0 / Ncr," + s + ")", lam, StepUnit.None, RefFlex);
+        t.Add("φ" + s, "about " + s, "0.5 [1 + α (λ̄ − λ̄0) + λ̄²]", Ec9Rules.Phi(lam, alpha, lam0), StepUnit.None, RefFlex);
+        t.Add("χ" + s, "reduction factor for flexural buckling about " + s, lam <= lam0 ? "1 (λ̄ ≤ λ̄0)" : "1 / (φ + √(φ² − λ̄²)) ≤ 1", chi, StepUnit.None, RefFlex);
+        t.Add("κ" + s, "factor for the weakening of welding", longitudinal
+            ? (cls == BucklingClass.A ? "1 − (1 − A1/A) 10^(−λ̄) − (0.05 + 0.1 A1/A) λ̄^(1.3(1 − λ̄))" : "1 + 0.04 (4λ̄)^(0.5 − λ̄) − 0.22 λ̄^(1.4(1 − λ̄)) (1 for λ̄ ≤ 0.2)")
+            : "1 (no longitudinal welds)", kappa, StepUnit.None, RefKappa);
+        t.Add(y ? "Nb,y,Rd" : "Nb,z,Rd", "flexural buckling resistance about " + s, "κ χ Aeff f0 / γM1", nRd, StepUnit.Force, RefNRd);
     }
 
     private static double Torsional(CalculationTrace? t, in ResolvedMember m, in Ec9Classified c, in AxisData y, in AxisData z,
@@ -335,33 +362,37 @@ public sealed class Eurocode9Compression : IResistanceMethod
         lam = Math.Sqrt(aT * f0 / nCr);
         chi = Ec9Rules.Chi(lam, alpha, lam0);
         double nRd = chi * aT * f0 / gm1;
-        if (t is not null)
-        {
-            t.Add("It", "St Venant torsion constant", TraceCommon.Input, m.TorsionConstantM4, StepUnit.SecondMoment, "section");
-            t.Add("Iw", "warping constant", TraceCommon.Input, m.WarpingConstantM6, StepUnit.WarpingConstant, "section");
-            t.Add("y0", "shear-centre offset along y from the centroid", TraceCommon.Input, y0, StepUnit.Length, "section");
-            t.Add("z0", "shear-centre offset along z from the centroid", TraceCommon.Input, z0, StepUnit.Length, "section");
-            t.Add("LT", "effective length for twisting", TraceCommon.Input, lt, StepUnit.Length, "restraint");
-            t.Add("i0²", "polar radius of gyration about the shear centre, squared", "(Iy + Iz) / A + y0² + z0²", i02, StepUnit.Area, RefTors);
-            t.Add("Ncr,T", "elastic torsional critical force", "(G It + π² E Iw / LT²) / i0²", nT, StepUnit.Force, RefTors);
-            if (coupled)
-            {
-                t.Note("The shear centre is off the centroid: twist couples with bending; smallest root of i0² (N − Ny)(N − Nz)(N − NT) − N² y0² (N − Nz) − N² z0² (N − Ny) = 0.", RefTors);
-                t.Add("Ncr,TF", "elastic flexural-torsional critical force", "smallest coupled root", nCr, StepUnit.Force, RefTors);
-            }
-            else
-                t.Note("The shear centre is at the centroid: the torsional mode is uncoupled (Ncr = Ncr,T).", RefTors);
-            t.Note(radiating ? "Section of radiating outstands: α = 0.20, λ̄0 = 0.60; Aeff without local-buckling reduction (ρc = 1), with HAZ."
-                : "General section: α = 0.35, λ̄0 = 0.40; Aeff with local buckling and HAZ.", "EN 1999-1-1 6.3.1.4, Table 6.6");
-            t.Add("Aeff,T", "effective area for torsional buckling", radiating ? "A − Ahaz (1 − ρo,haz)" : "Aeff − Ahaz (1 − ρo,haz)", aT, StepUnit.Area, "EN 1999-1-1 6.3.1.4");
-            t.Add("λ̄T", "relative slenderness, torsional mode", coupled ? "√(Aeff,T f0 / Ncr,TF)" : "√(Aeff,T f0 / Ncr,T)", lam, StepUnit.None, "EN 1999-1-1 6.3.1.4");
-            t.Add("χT", "reduction factor, torsional mode", lam <= lam0 ? "1 (λ̄ ≤ λ̄0)" : "1 / (φ + √(φ² − λ̄²)) ≤ 1", chi, StepUnit.None, RefFlex);
-            t.Add("NT,Rd", coupled ? "flexural-torsional buckling resistance" : "torsional buckling resistance", "χT Aeff,T f0 / γM1", nRd, StepUnit.Force, RefNRd);
-        }
+        if (t is not null) TorsionalSteps(t, m, radiating, lt, y0, z0, i02, nT, nCr, coupled, aT, lam, lam0, chi, nRd);
         return nRd;
     }
 
-    private static void ClassificationSteps(CalculationTrace t, in Ec9Classified c, Span<Ec9Plate> p, double eps, BucklingClass cls, bool welded)
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TorsionalSteps(CalculationTrace t, in ResolvedMember m, bool radiating, double lt, double y0, double z0, double i02, double nT,
+        double nCr, bool coupled, double aT, double lam, double lam0, double chi, double nRd)
+    {
+        t.Add("It", "St Venant torsion constant", TraceCommon.Input, m.TorsionConstantM4, StepUnit.SecondMoment, "section");
+        t.Add("Iw", "warping constant", TraceCommon.Input, m.WarpingConstantM6, StepUnit.WarpingConstant, "section");
+        t.Add("y0", "shear-centre offset along y from the centroid", TraceCommon.Input, y0, StepUnit.Length, "section");
+        t.Add("z0", "shear-centre offset along z from the centroid", TraceCommon.Input, z0, StepUnit.Length, "section");
+        t.Add("LT", "effective length for twisting", TraceCommon.Input, lt, StepUnit.Length, "restraint");
+        t.Add("i0²", "polar radius of gyration about the shear centre, squared", "(Iy + Iz) / A + y0² + z0²", i02, StepUnit.Area, RefTors);
+        t.Add("Ncr,T", "elastic torsional critical force", "(G It + π² E Iw / LT²) / i0²", nT, StepUnit.Force, RefTors);
+        if (coupled)
+        {
+            t.Note("The shear centre is off the centroid: twist couples with bending; smallest root of i0² (N − Ny)(N − Nz)(N − NT) − N² y0² (N − Nz) − N² z0² (N − Ny) = 0.", RefTors);
+            t.Add("Ncr,TF", "elastic flexural-torsional critical force", "smallest coupled root", nCr, StepUnit.Force, RefTors);
+        }
+        else
+            t.Note("The shear centre is at the centroid: the torsional mode is uncoupled (Ncr = Ncr,T).", RefTors);
+        t.Note(radiating ? "Section of radiating outstands: α = 0.20, λ̄0 = 0.60; Aeff without local-buckling reduction (ρc = 1), with HAZ."
+            : "General section: α = 0.35, λ̄0 = 0.40; Aeff with local buckling and HAZ.", "EN 1999-1-1 6.3.1.4, Table 6.6");
+        t.Add("Aeff,T", "effective area for torsional buckling", radiating ? "A − Ahaz (1 − ρo,haz)" : "Aeff − Ahaz (1 − ρo,haz)", aT, StepUnit.Area, "EN 1999-1-1 6.3.1.4");
+        t.Add("λ̄T", "relative slenderness, torsional mode", coupled ? "√(Aeff,T f0 / Ncr,TF)" : "√(Aeff,T f0 / Ncr,T)", lam, StepUnit.None, "EN 1999-1-1 6.3.1.4");
+        t.Add("χT", "reduction factor, torsional mode", lam <= lam0 ? "1 (λ̄ ≤ λ̄0)" : "1 / (φ + √(φ² − λ̄²)) ≤ 1", chi, StepUnit.None, RefFlex);
+        t.Add("NT,Rd", coupled ? "flexural-torsional buckling resistance" : "torsional buckling resistance", "χT Aeff,T f0 / γM1", nRd, StepUnit.Force, RefNRd);
+    }
+
+    private static void ClassificationSteps(CalculationTrace t, in Ec9Classified c, ReadOnlySpan<Ec9Plate> p, double eps, BucklingClass cls, bool welded)
     {
         if (c.IsSolid)
         {
@@ -381,7 +412,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         }
         for (int i = 0; i < c.Count; i++)
         {
-            ref var pl = ref p[i];
+            ref readonly var pl = ref p[i];
             string name = Ec9Section.PartName(pl.Part) + " " + (i + 1).ToString(System.Globalization.CultureInfo.InvariantCulture);
             Ec9Rules.ClassLimits(cls, welded, pl.Outstand, out double b1, out double b2, out double b3);
             t.Add("b/t", name + (pl.Outstand ? " (outstand)" : " (internal)") + ", β = b / t under uniform compression",

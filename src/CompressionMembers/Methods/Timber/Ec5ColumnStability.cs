@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials.Timber;
 using CompressionMembers.Methods.Common;
@@ -192,33 +193,9 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.CheckLtb = ChecksLateralTorsionalBuckling;
         Ec5Kernel.Run(i, out var o);
 
-        if (trace is not null)
-        {
-            string src = mat.Source;
-            trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; values from {src}.", src);
-            trace.Add("fc,0,k", "characteristic compression strength parallel to grain", TimberRules.Input, i.Fc0kPa, StepUnit.Stress, src);
-            trace.Add("fm,k", "characteristic bending strength", TimberRules.Input, i.FmkPa, StepUnit.Stress, src);
-            trace.Add("E0,05", "fifth-percentile modulus parallel to grain (stability)", TimberRules.Input, i.E005Pa, StepUnit.Stress, src);
-            TraceCommon.SectionAndLengths(trace, member);
-            if (_kmod is { } k)
-                trace.Add("kmod", "modification factor (user value)", TimberRules.Input, k, StepUnit.None, "user value replacing EN 1995-1-1 Table 3.1");
-            else
-                trace.Add("kmod", "modification factor", $"Table 3.1: {TimberRules.ProductText(mat.Product)}, {TimberRules.ServiceClassText(ServiceClass)}, {TimberRules.DurationText(actions.LoadDuration)} action", i.Kmod, StepUnit.None, En1995Factors.KmodRef);
-            if (_gammaM is { } g)
-                trace.Add("γM", "partial factor for material (national-annex or user value)", TimberRules.Input, g, StepUnit.None, "user value replacing EN 1995-1-1 Table 2.3");
-            else
-                trace.Add("γM", "partial factor for material", $"recommended value for {TimberRules.ProductText(mat.Product)}", i.GammaM, StepUnit.None, En1995Factors.GammaMRef);
-            TimberRules.Actions(trace, actions, i.MyEdNm, i.MzEdNm);
-            if (i.MyEdNm != 0 || i.MzEdNm != 0)
-            {
-                string khRef = SizeFactorRef(mat.Product);
-                trace.Add("kh,y", "size factor for bending about y (depth h)", ApplySizeFactor ? ruleY : "min(" + ruleY + ", 1) (increase not applied)", i.KhY, StepUnit.None, khRef);
-                trace.Add("kh,z", "size factor for bending about z (depth b)", ApplySizeFactor ? ruleZ : "min(" + ruleZ + ", 1) (increase not applied)", i.KhZ, StepUnit.None, khRef);
-            }
-            Ec5Trace.Write(trace, i, o, "");
-            if (ChecksLateralTorsionalBuckling && i.MyEdNm != 0 && !i.Rectangular)
-                trace.Note("Lateral torsional buckling is not checked: a circular section has no strong axis.", "EN 1995-1-1 6.3.3");
-        }
+        // The steps are written by a separate method so that the untraced path keeps a small frame (no string temporaries
+        // to zero on entry); it receives the very values the kernel computed.
+        if (trace is not null) WriteTrace(trace, member, actions, mat, i, o, ruleY, ruleZ);
 
         double ncrY = Math.PI * Math.PI * i.E005Pa * i.IyM4 / (i.LefYM * i.LefYM);
         double ncrZ = Math.PI * Math.PI * i.E005Pa * i.IzM4 / (i.LefZM * i.LefZM);
@@ -227,5 +204,35 @@ public sealed class Ec5ColumnStability : IResistanceMethod
             new AxisOutcome(i.LefZM, o.LambdaZ, o.LambdaRelZ, ncrZ, o.KcZ, o.KcZ * o.Fc0dPa * i.AreaM2),
             o.LtbChecked ? new AxisOutcome(i.LefLtbM, double.NaN, o.LambdaRelM, double.NaN, o.KCrit, double.NaN) : default,
             trace);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void WriteTrace(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat,
+        in Ec5Input i, in Ec5Output o, string ruleY, string ruleZ)
+    {
+        string src = mat.Source;
+        trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; values from {src}.", src);
+        trace.Add("fc,0,k", "characteristic compression strength parallel to grain", TimberRules.Input, i.Fc0kPa, StepUnit.Stress, src);
+        trace.Add("fm,k", "characteristic bending strength", TimberRules.Input, i.FmkPa, StepUnit.Stress, src);
+        trace.Add("E0,05", "fifth-percentile modulus parallel to grain (stability)", TimberRules.Input, i.E005Pa, StepUnit.Stress, src);
+        TraceCommon.SectionAndLengths(trace, member);
+        if (_kmod is { } k)
+            trace.Add("kmod", "modification factor (user value)", TimberRules.Input, k, StepUnit.None, "user value replacing EN 1995-1-1 Table 3.1");
+        else
+            trace.Add("kmod", "modification factor", $"Table 3.1: {TimberRules.ProductText(mat.Product)}, {TimberRules.ServiceClassText(ServiceClass)}, {TimberRules.DurationText(actions.LoadDuration)} action", i.Kmod, StepUnit.None, En1995Factors.KmodRef);
+        if (_gammaM is { } g)
+            trace.Add("γM", "partial factor for material (national-annex or user value)", TimberRules.Input, g, StepUnit.None, "user value replacing EN 1995-1-1 Table 2.3");
+        else
+            trace.Add("γM", "partial factor for material", $"recommended value for {TimberRules.ProductText(mat.Product)}", i.GammaM, StepUnit.None, En1995Factors.GammaMRef);
+        TimberRules.Actions(trace, actions, i.MyEdNm, i.MzEdNm);
+        if (i.MyEdNm != 0 || i.MzEdNm != 0)
+        {
+            string khRef = SizeFactorRef(mat.Product);
+            trace.Add("kh,y", "size factor for bending about y (depth h)", ApplySizeFactor ? ruleY : "min(" + ruleY + ", 1) (increase not applied)", i.KhY, StepUnit.None, khRef);
+            trace.Add("kh,z", "size factor for bending about z (depth b)", ApplySizeFactor ? ruleZ : "min(" + ruleZ + ", 1) (increase not applied)", i.KhZ, StepUnit.None, khRef);
+        }
+        Ec5Trace.Write(trace, i, o, "");
+        if (ChecksLateralTorsionalBuckling && i.MyEdNm != 0 && !i.Rectangular)
+            trace.Note("Lateral torsional buckling is not checked: a circular section has no strong axis.", "EN 1995-1-1 6.3.3");
     }
 }

@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using System.Collections.Generic;
 using CompressionMembers.Actions;
 using CompressionMembers.Internal;
@@ -193,61 +194,9 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         var o = default(Ec5Output);
         if (alive) Ec5Kernel.Run(i, out o);
 
-        if (trace is not null)
-        {
-            string src = mat.Source;
-            TimberRules.Dimensions(member, out double b, out double h);
-            trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; values from {src}.", src);
-            trace.Add("fc,0,k", "characteristic compression strength parallel to grain", TimberRules.Input, member.StrengthPa, StepUnit.Stress, src);
-            trace.Add("fm,k", "characteristic bending strength", TimberRules.Input, mat.BendingStrength.Pascals, StepUnit.Stress, src);
-            trace.Add("E0,05", "fifth-percentile modulus parallel to grain", TimberRules.Input, member.ElasticModulusPa, StepUnit.Stress, src);
-            TraceCommon.SectionAndLengths(trace, member);
-            trace.Add("b", "width (along y)", TimberRules.Input, b, StepUnit.Length, "section");
-            trace.Add("h", "depth (along z)", TimberRules.Input, h, StepUnit.Length, "section");
-            trace.Add("treq", "required fire resistance time", TimberRules.Input, _tReqS, StepUnit.Time, "fire requirement");
-            trace.Note(Exposure switch
-            {
-                FireExposure.FourSides => "Four faces exposed to fire.",
-                FireExposure.ThreeSidesWidthFaceProtected => "Three faces exposed; one width face (normal to z) protected.",
-                _ => "Three faces exposed; one depth face (normal to y) protected.",
-            }, "EN 1995-1-2 4.2.2");
-            double rhok = mat.CharacteristicDensity.KilogramsPerCubicMeter;
-            if (En1995Factors.CharringCoverage(mat.Product, rhok) is null)
-                trace.Add("β0", "one-dimensional design charring rate (for reference)", "Table 3.1", En1995Factors.CharringRateMmPerMin(mat.Product, rhok, false) / 60000.0, StepUnit.CharringRate, En1995Factors.CharringRef);
-            trace.Add("βn", "notional design charring rate (includes corner rounding)", _betaNMs is null ? "Table 3.1: " + TimberRules.ProductText(mat.Product) : "user value", BetaN(mat), StepUnit.CharringRate, _betaNMs is null ? En1995Factors.CharringRef : "user value");
-            trace.Add("dchar,n", "notional charring depth", "βn t", BetaN(mat) * _tReqS, StepUnit.Length, "EN 1995-1-2 3.4.2 (3.2)");
-            trace.Add("k0", "zero-strength layer factor", _tReqS < 1200 ? "t / 20 min" : "1 (t ≥ 20 min)", K0(_tReqS), StepUnit.None, "EN 1995-1-2 4.2.2, Table 4.1");
-            trace.Add("d0", "depth of the zero-strength layer", "7 mm", D0M, StepUnit.Length, "EN 1995-1-2 4.2.2(1)");
-            trace.Add("def", "effective charring depth", "dchar,n + k0 d0", def, StepUnit.Length, ResRef);
-            trace.Add("b,fi", "residual width", Exposure == FireExposure.ThreeSidesDepthFaceProtected ? "b − def" : "b − 2 def", bFi, StepUnit.Length, ResRef);
-            trace.Add("h,fi", "residual depth", Exposure == FireExposure.ThreeSidesWidthFaceProtected ? "h − def" : "h − 2 def", hFi, StepUnit.Length, ResRef);
-            trace.Add("kfi", "20 % fractile factor", _kfi is null ? "Table 2.1: " + TimberRules.ProductText(mat.Product) : "user value", Kfi(mat), StepUnit.None, _kfi is null ? En1995Factors.KfiRef : "user value");
-            trace.Add("kmod,fi", "modification factor in fire", "1.0", 1.0, StepUnit.None, "EN 1995-1-2 4.2.2(5)");
-            trace.Add("γM,fi", "partial factor in fire", FireMaterialFactor == 1.0 ? "recommended value" : "national-annex or user value", FireMaterialFactor, StepUnit.None, "EN 1995-1-2 2.3(1)");
-            TimberRules.Actions(trace, actions, TimberRules.MomentY(actions), TimberRules.MomentZ(actions));
-            if (IncludesCentroidShift && (shZ != 0 || shY != 0))
-            {
-                trace.Add("Δz", "shift of the residual centroid along z", "def / 2", shZ, StepUnit.Length, "common practice (three sides exposed)");
-                trace.Add("Δy", "shift of the residual centroid along y", "def / 2", shY, StepUnit.Length, "common practice (three sides exposed)");
-                trace.Add("My,Ed,fi", "design moment about y on the residual section", "My,Ed + NEd Δz", i.MyEdNm, StepUnit.Moment, "common practice (conservative)");
-                trace.Add("Mz,Ed,fi", "design moment about z on the residual section", "Mz,Ed + NEd Δy", i.MzEdNm, StepUnit.Moment, "common practice (conservative)");
-            }
-            if (alive)
-            {
-                trace.Add("A,fi", "residual area", "b,fi h,fi", i.AreaM2, StepUnit.Area, ResRef);
-                trace.Add("Iy,fi", "residual second moment about y", "b,fi h,fi³ / 12", i.IyM4, StepUnit.SecondMoment, ResRef);
-                trace.Add("Iz,fi", "residual second moment about z", "h,fi b,fi³ / 12", i.IzM4, StepUnit.SecondMoment, ResRef);
-                trace.Note("The EN 1995-1-1 checks follow on the residual section with fire design values (no kh increase).", "EN 1995-1-2 4.2.2(2)");
-                Ec5Trace.Write(trace, i, o, ",fi");
-            }
-            else
-            {
-                trace.Note("The residual section has burnt away before the required time: the member fails.", ResRef);
-                trace.Add("u", "utilisation", "no residual section", double.PositiveInfinity, StepUnit.None, ResRef);
-            }
-            double tFail = TimeToFailureS(member, actions, mat);
-            trace.Add("t(u=1)", "fire duration at which the utilisation reaches 1", "root of u(t) = 1 (Brent's method)", tFail, StepUnit.Time, "EN 1995-1-2 4.2.2; MathNet.Numerics Brent");
-        }
+        // The steps are written by a separate method (cold code) that receives the values computed above, so that the
+        // untraced frame stays small.
+        if (trace is not null) WriteTrace(trace, member, actions, mat, i, o, alive, def, bFi, hFi, shZ, shY);
 
         if (!alive)
             return new CheckResult(member, actions, this, 0, double.PositiveInfinity, BucklingAxis.None, FailureMode.Yielding,
@@ -257,6 +206,64 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
             new AxisOutcome(i.LefYM, o.LambdaY, o.LambdaRelY, Math.PI * Math.PI * e20 * i.IyM4 / (i.LefYM * i.LefYM), o.KcY, o.KcY * o.Fc0dPa * i.AreaM2),
             new AxisOutcome(i.LefZM, o.LambdaZ, o.LambdaRelZ, Math.PI * Math.PI * e20 * i.IzM4 / (i.LefZM * i.LefZM), o.KcZ, o.KcZ * o.Fc0dPa * i.AreaM2),
             o.LtbChecked ? new AxisOutcome(i.LefLtbM, double.NaN, o.LambdaRelM, double.NaN, o.KCrit, double.NaN) : default, trace);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void WriteTrace(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat,
+        in Ec5Input i, in Ec5Output o, bool alive, double def, double bFi, double hFi, double shZ, double shY)
+    {
+        string src = mat.Source;
+        TimberRules.Dimensions(member, out double b, out double h);
+        trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; values from {src}.", src);
+        trace.Add("fc,0,k", "characteristic compression strength parallel to grain", TimberRules.Input, member.StrengthPa, StepUnit.Stress, src);
+        trace.Add("fm,k", "characteristic bending strength", TimberRules.Input, mat.BendingStrength.Pascals, StepUnit.Stress, src);
+        trace.Add("E0,05", "fifth-percentile modulus parallel to grain", TimberRules.Input, member.ElasticModulusPa, StepUnit.Stress, src);
+        TraceCommon.SectionAndLengths(trace, member);
+        trace.Add("b", "width (along y)", TimberRules.Input, b, StepUnit.Length, "section");
+        trace.Add("h", "depth (along z)", TimberRules.Input, h, StepUnit.Length, "section");
+        trace.Add("treq", "required fire resistance time", TimberRules.Input, _tReqS, StepUnit.Time, "fire requirement");
+        trace.Note(Exposure switch
+        {
+            FireExposure.FourSides => "Four faces exposed to fire.",
+            FireExposure.ThreeSidesWidthFaceProtected => "Three faces exposed; one width face (normal to z) protected.",
+            _ => "Three faces exposed; one depth face (normal to y) protected.",
+        }, "EN 1995-1-2 4.2.2");
+        double rhok = mat.CharacteristicDensity.KilogramsPerCubicMeter;
+        if (En1995Factors.CharringCoverage(mat.Product, rhok) is null)
+            trace.Add("β0", "one-dimensional design charring rate (for reference)", "Table 3.1", En1995Factors.CharringRateMmPerMin(mat.Product, rhok, false) / 60000.0, StepUnit.CharringRate, En1995Factors.CharringRef);
+        trace.Add("βn", "notional design charring rate (includes corner rounding)", _betaNMs is null ? "Table 3.1: " + TimberRules.ProductText(mat.Product) : "user value", BetaN(mat), StepUnit.CharringRate, _betaNMs is null ? En1995Factors.CharringRef : "user value");
+        trace.Add("dchar,n", "notional charring depth", "βn t", BetaN(mat) * _tReqS, StepUnit.Length, "EN 1995-1-2 3.4.2 (3.2)");
+        trace.Add("k0", "zero-strength layer factor", _tReqS < 1200 ? "t / 20 min" : "1 (t ≥ 20 min)", K0(_tReqS), StepUnit.None, "EN 1995-1-2 4.2.2, Table 4.1");
+        trace.Add("d0", "depth of the zero-strength layer", "7 mm", D0M, StepUnit.Length, "EN 1995-1-2 4.2.2(1)");
+        trace.Add("def", "effective charring depth", "dchar,n + k0 d0", def, StepUnit.Length, ResRef);
+        trace.Add("b,fi", "residual width", Exposure == FireExposure.ThreeSidesDepthFaceProtected ? "b − def" : "b − 2 def", bFi, StepUnit.Length, ResRef);
+        trace.Add("h,fi", "residual depth", Exposure == FireExposure.ThreeSidesWidthFaceProtected ? "h − def" : "h − 2 def", hFi, StepUnit.Length, ResRef);
+        trace.Add("kfi", "20 % fractile factor", _kfi is null ? "Table 2.1: " + TimberRules.ProductText(mat.Product) : "user value", Kfi(mat), StepUnit.None, _kfi is null ? En1995Factors.KfiRef : "user value");
+        trace.Add("kmod,fi", "modification factor in fire", "1.0", 1.0, StepUnit.None, "EN 1995-1-2 4.2.2(5)");
+        trace.Add("γM,fi", "partial factor in fire", FireMaterialFactor == 1.0 ? "recommended value" : "national-annex or user value", FireMaterialFactor, StepUnit.None, "EN 1995-1-2 2.3(1)");
+        TimberRules.Actions(trace, actions, TimberRules.MomentY(actions), TimberRules.MomentZ(actions));
+        if (IncludesCentroidShift && (shZ != 0 || shY != 0))
+        {
+            trace.Add("Δz", "shift of the residual centroid along z", "def / 2", shZ, StepUnit.Length, "common practice (three sides exposed)");
+            trace.Add("Δy", "shift of the residual centroid along y", "def / 2", shY, StepUnit.Length, "common practice (three sides exposed)");
+            trace.Add("My,Ed,fi", "design moment about y on the residual section", "My,Ed + NEd Δz", i.MyEdNm, StepUnit.Moment, "common practice (conservative)");
+            trace.Add("Mz,Ed,fi", "design moment about z on the residual section", "Mz,Ed + NEd Δy", i.MzEdNm, StepUnit.Moment, "common practice (conservative)");
+        }
+        if (alive)
+        {
+            trace.Add("A,fi", "residual area", "b,fi h,fi", i.AreaM2, StepUnit.Area, ResRef);
+            trace.Add("Iy,fi", "residual second moment about y", "b,fi h,fi³ / 12", i.IyM4, StepUnit.SecondMoment, ResRef);
+            trace.Add("Iz,fi", "residual second moment about z", "h,fi b,fi³ / 12", i.IzM4, StepUnit.SecondMoment, ResRef);
+            trace.Note("The EN 1995-1-1 checks follow on the residual section with fire design values (no kh increase).", "EN 1995-1-2 4.2.2(2)");
+            Ec5Trace.Write(trace, i, o, ",fi");
+        }
+        else
+        {
+            trace.Note("The residual section has burnt away before the required time: the member fails.", ResRef);
+            trace.Add("u", "utilisation", "no residual section", double.PositiveInfinity, StepUnit.None, ResRef);
+        }
+        double tFail = TimeToFailureS(member, actions, mat);
+        trace.Add("t(u=1)", "fire duration at which the utilisation reaches 1", "root of u(t) = 1 (Brent's method)", tFail, StepUnit.Time, "EN 1995-1-2 4.2.2; MathNet.Numerics Brent");
     }
 
     private static string FireCheckName(in Ec5Output o) => o.Governs switch

@@ -64,8 +64,9 @@ internal static class Ec5Kernel
         o.IzRadM = Math.Sqrt(i.IzM4 / i.AreaM2);
         o.LambdaY = i.LefYM / o.IyRadM;
         o.LambdaZ = i.LefZM / o.IzRadM;
-        o.LambdaRelY = RelativeSlenderness(o.LambdaY, i.Fc0kPa, i.E005Pa);
-        o.LambdaRelZ = RelativeSlenderness(o.LambdaZ, i.Fc0kPa, i.E005Pa);
+        double root = Math.Sqrt(i.Fc0kPa / i.E005Pa);                 // common to both axes (6.21, 6.22)
+        o.LambdaRelY = o.LambdaY / Math.PI * root;                   // = RelativeSlenderness(λy, …), same operations
+        o.LambdaRelZ = o.LambdaZ / Math.PI * root;
         o.KY = K(o.LambdaRelY, i.BetaC);
         o.KZ = K(o.LambdaRelZ, i.BetaC);
         o.KcY = Kc(o.LambdaRelY, i.BetaC);

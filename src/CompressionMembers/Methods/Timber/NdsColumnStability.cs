@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using System.Collections.Generic;
 using CompressionMembers.Actions;
 using CompressionMembers.Internal;
@@ -272,8 +273,11 @@ public sealed class NdsColumnStability : IResistanceMethod
         bool govY = r1 >= r2;
         double r = govY ? r1 : r2;
         double c = mat.ColumnConstant;
-        double fcE = 0.822 * eminP / (r * r);
-        double cp = Cp(fcE / fcStar, c);
+        // FcE and Cp about each axis once; the governing ones are the same numbers (same operations on r1 or r2).
+        double fcE1 = 0.822 * eminP / (r1 * r1), fcE2 = 0.822 * eminP / (r2 * r2);
+        double cpY = Cp(fcE1 / fcStar, c), cpZ = Cp(fcE2 / fcStar, c);
+        double fcE = govY ? fcE1 : fcE2;
+        double cp = govY ? cpY : cpZ;
         double fcP = fcStar * cp;
         double area = member.AreaM2;
         double fc = actions.AxialForceN / area;
@@ -295,7 +299,6 @@ public sealed class NdsColumnStability : IResistanceMethod
             cl = Cl(fbE / fbStar);
         }
         double fb1P = fbStar * cl, fb2P = fbStar * adj.FlatUse;
-        double fcE1 = 0.822 * eminP / (r1 * r1), fcE2 = 0.822 * eminP / (r2 * r2);
 
         double u, t1 = 0, t2 = 0, den1 = 1, den2 = 1;
         bool unbounded = false;
@@ -313,97 +316,107 @@ public sealed class NdsColumnStability : IResistanceMethod
             u = unbounded ? double.PositiveInfinity : a * a + t1 + t2;
         }
 
+        // The steps are written by a separate method (cold code) that receives the values computed above, so that the
+        // untraced frame stays small.
         if (trace is not null)
-        {
-            string src = mat.Source;
-            trace.Note($"{mat.Name}: {ProductText(mat.Product)} reference design values from {src}; {(asd ? "ASD" : "LRFD")}.", src);
-            trace.Add("Fc", "reference compression design value parallel to grain", TimberRules.Input, fcRef, StepUnit.Stress, src);
-            trace.Add("Fb", "reference bending design value", TimberRules.Input, fbRef, StepUnit.Stress, src);
-            trace.Add("Emin", "reference modulus for beam and column stability", TimberRules.Input, eminRef, StepUnit.Stress, src);
-            TraceCommon.SectionAndLengths(trace, member);
-            if (asd)
-                trace.Add("CD", "load duration factor", _cd is null ? $"{TimberRules.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", cd, StepUnit.None, "NDS 2018 2.3.2, Table 2.3.2");
-            else
-            {
-                trace.Add("λ", "time effect factor", _lambda is null ? $"{TimberRules.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", lam, StepUnit.None, "NDS 2018 N.3.3, Table N3");
-                trace.Add("KF", "format conversion factor for Fc", "2.40", kfC, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
-                trace.Add("φc", "resistance factor for compression", "0.90", phiC, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
-                trace.Add("KF", "format conversion factor for Emin", "1.76", kfE, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
-                trace.Add("φs", "resistance factor for stability", "0.85", phiS, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
-            }
-            trace.Add("CM", "wet service factor on Fc", TimberRules.Input, adj.WetServiceFc, StepUnit.None, "NDS 2018 4.3.3");
-            trace.Add("Ct", "temperature factor on Fc", TimberRules.Input, adj.TemperatureFc, StepUnit.None, "NDS 2018 2.3.3");
-            trace.Add("CF", "size factor on Fc", TimberRules.Input, adj.SizeFc, StepUnit.None, "NDS 2018 4.3.6");
-            trace.Add("Ci", "incising factor on Fc", TimberRules.Input, adj.IncisingFc, StepUnit.None, "NDS 2018 4.3.8");
-            trace.Add("Fc*", "compression design value with all factors but Cp", asd ? "Fc CD CM Ct CF Ci" : "Fc CM Ct CF Ci KF φc λ", fcStar, StepUnit.Stress, "NDS 2018 3.7.1.5, Table 4.3.1");
-            trace.Add("CM", "wet service factor on Emin", TimberRules.Input, adj.WetServiceEmin, StepUnit.None, "NDS 2018 4.3.3");
-            trace.Add("Ct", "temperature factor on Emin", TimberRules.Input, adj.TemperatureEmin, StepUnit.None, "NDS 2018 2.3.3");
-            trace.Add("Ci", "incising factor on Emin", TimberRules.Input, adj.IncisingEmin, StepUnit.None, "NDS 2018 4.3.8");
-            trace.Add("E′min", "adjusted stability modulus", asd ? "Emin CM Ct Ci" : "Emin CM Ct Ci KF φs", eminP, StepUnit.Stress, "NDS 2018 Table 4.3.1");
-            if (member.SectionKind == SectionKind.SolidCircle)
-                trace.Note("Round column: designed as the square of equal area, d = D √π / 2.", "NDS 2018 3.7.3");
-            trace.Add("d1", "dimension for buckling about y", member.SectionKind == SectionKind.SolidCircle ? "D √π / 2" : "depth h", d1, StepUnit.Length, "NDS 2018 3.7.1.3");
-            trace.Add("d2", "dimension for buckling about z", member.SectionKind == SectionKind.SolidCircle ? "D √π / 2" : "width b", d2, StepUnit.Length, "NDS 2018 3.7.1.3");
-            trace.Add("le1/d1", "slenderness ratio about y", "Lcr,y / d1", r1, StepUnit.None, "NDS 2018 3.7.1.3");
-            trace.Add("le2/d2", "slenderness ratio about z", "Lcr,z / d2", r2, StepUnit.None, "NDS 2018 3.7.1.3");
-            trace.Add("le/d", "governing slenderness ratio", "max(le1/d1, le2/d2)", r, StepUnit.None, "NDS 2018 3.7.1.3");
-            trace.Add("(le/d)max", "slenderness limit", AllowsConstructionSlenderness ? "75 (during construction only)" : "50", SlendernessLimit, StepUnit.None, "NDS 2018 3.7.1.4");
-            trace.Add("FcE", "critical buckling design value", "0.822 E′min / (le/d)²", fcE, StepUnit.Stress, "NDS 2018 3.7.1.5 (3.7-1)");
-            trace.Add("c", "column constant", ProductText(mat.Product) + ": " + (c == 0.8 ? "0.8" : c == 0.85 ? "0.85" : "0.9"), c, StepUnit.None, "NDS 2018 3.7.1.5");
-            trace.Add("Cp", "column stability factor", "(1 + FcE/Fc*)/(2c) − √[((1 + FcE/Fc*)/(2c))² − (FcE/Fc*)/c]", cp, StepUnit.None, "NDS 2018 3.7.1.5 (3.7-1)");
-            trace.Add("F′c", "adjusted compression design value", "Fc* Cp", fcP, StepUnit.Stress, "NDS 2018 3.7.1");
-            TimberRules.Actions(trace, actions, m1, m2);
-            trace.Add("fc", "actual compression stress", "P / A", fc, StepUnit.Stress, "NDS 2018 3.6.3");
-            if (bending)
-            {
-                trace.Add("CM", "wet service factor on Fb", TimberRules.Input, adj.WetServiceFb, StepUnit.None, "NDS 2018 4.3.3");
-                trace.Add("Ct", "temperature factor on Fb", TimberRules.Input, adj.TemperatureFb, StepUnit.None, "NDS 2018 2.3.3");
-                trace.Add("CF", "size factor on Fb", TimberRules.Input, adj.SizeFb, StepUnit.None, "NDS 2018 4.3.6");
-                trace.Add("Ci", "incising factor on Fb", TimberRules.Input, adj.IncisingFb, StepUnit.None, "NDS 2018 4.3.8");
-                trace.Add("Cr", "repetitive member factor on Fb", TimberRules.Input, adj.Repetitive, StepUnit.None, "NDS 2018 4.3.9");
-                trace.Add("Cfu", "flat use factor on Fb about z", TimberRules.Input, adj.FlatUse, StepUnit.None, "NDS 2018 4.3.7");
-                if (!asd)
-                {
-                    trace.Add("KF", "format conversion factor for Fb", "2.54", kfB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
-                    trace.Add("φb", "resistance factor for bending", "0.85", phiB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
-                }
-                trace.Add("Fb*", "bending design value with all factors but CL and Cfu", asd ? "Fb CD CM Ct CF Ci Cr" : "Fb CM Ct CF Ci Cr KF φb λ", fbStar, StepUnit.Stress, "NDS 2018 Table 4.3.1");
-                if (ltb)
-                {
-                    trace.Add("lu", "laterally unsupported length (free to twist)", "K,twist × longest segment", member.EffectiveLengthTorsionalM, StepUnit.Length, "NDS 2018 3.3.3.4");
-                    trace.Add("le", "effective length for bending", "Table 3.3.3, any loading: 2.06 lu, 1.63 lu + 3d or 1.84 lu", le, StepUnit.Length, "NDS 2018 3.3.3.5, Table 3.3.3");
-                    trace.Add("RB", "slenderness ratio for bending", "√(le d / b²)", rb, StepUnit.None, "NDS 2018 3.3.3.6 (3.3-5)");
-                    trace.Add("FbE", "critical buckling design value for bending", "1.20 E′min / RB²", fbE, StepUnit.Stress, "NDS 2018 3.3.3.8");
-                    trace.Add("CL", "beam stability factor", "(1 + FbE/Fb*)/1.9 − √[((1 + FbE/Fb*)/1.9)² − (FbE/Fb*)/0.95]", cl, StepUnit.None, "NDS 2018 3.3.3.8 (3.3-6)");
-                }
-                else if (fb1 > 0)
-                    trace.Note("Edgewise bending with depth not above breadth (or a round section): CL = 1.", "NDS 2018 3.3.3.1");
-                trace.Add("F′b1", "adjusted bending design value about y", "Fb* CL", fb1P, StepUnit.Stress, "NDS 2018 3.9.2");
-                trace.Add("F′b2", "adjusted bending design value about z", "Fb* Cfu", fb2P, StepUnit.Stress, "NDS 2018 3.9.2, 4.3.7");
-                trace.Add("fc(6e1/d1)", "edgewise bending stress from the end eccentricity (about y)", "My,Ed / Sy", fb1, StepUnit.Stress, "NDS 2018 15.4.1");
-                trace.Add("fc(6e2/d2)", "flatwise bending stress from the end eccentricity (about z)", "Mz,Ed / Sz", fb2, StepUnit.Stress, "NDS 2018 15.4.1");
-                trace.Add("FcE1", "critical buckling design value about y", "0.822 E′min / (le1/d1)²", fcE1, StepUnit.Stress, "NDS 2018 3.9.2");
-                trace.Add("FcE2", "critical buckling design value about z", "0.822 E′min / (le2/d2)²", fcE2, StepUnit.Stress, "NDS 2018 3.9.2");
-                trace.Add("1 − fc/FcE1", "amplification denominator about y", "1 − fc / FcE1", den1, StepUnit.None, "NDS 2018 3.9.2 (3.9-3), 15.4.1");
-                trace.Add("1 − fc/FcE2 − (fbe1/FbE)²", "amplification denominator about z", "1 − fc / FcE2 − (fc(6e1/d1) / FbE)²", den2, StepUnit.None, "NDS 2018 3.9.2 (3.9-4), 15.4.1");
-                if (unbounded)
-                    trace.Note("An amplification denominator is not positive (fc ≥ FcE1, fc/FcE2 + (fbe1/FbE)² ≥ 1 or fbe1 ≥ FbE): the member is unstable and fails.", "NDS 2018 3.9.2");
-                trace.Add("u", "eccentric axial compression (no side loads)",
-                    "(fc/F′c)² + fbe1 [1 + 0.234 fc/FcE1] / [F′b1 (1 − fc/FcE1)] + fbe2 [1 + 0.234 fc/FcE2 + 0.234 (fbe1/FbE)²] / [F′b2 (1 − fc/FcE2 − (fbe1/FbE)²)], fbe = fc 6e/d",
-                    u, StepUnit.None, "NDS 2018 15.4.1 (15.4-1), with 3.9.2");
-            }
-            else
-                trace.Add("u", "utilisation in compression", "fc / F′c", u, StepUnit.None, "NDS 2018 3.6.3, 3.7.1");
-        }
+            WriteTrace(trace, member, actions, mat, adj, asd, cd, lam, kfC, kfB, kfE, phiC, phiB, phiS, fcRef, fbRef, eminRef, fcStar, eminP, fbStar,
+                d1, d2, r1, r2, r, c, fcE, cp, fcP, fc, m1, m2, fb1, fb2, bending, ltb, le, rb, fbE, cl, fb1P, fb2P, fcE1, fcE2, u, den1, den2, unbounded);
 
         var axis = bending ? (fb1 > 0 && fb2 > 0 ? BucklingAxis.Both : fb1 > 0 ? BucklingAxis.Y : BucklingAxis.Z) : (govY ? BucklingAxis.Y : BucklingAxis.Z);
         var mode = bending ? FailureMode.CombinedCompressionAndBending : FailureMode.FlexuralBuckling;
         string check = bending ? "NDS 2018 15.4.1 (15.4-1): eccentric axial compression, 3.9.2 interaction" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
-        double cpY = Cp(fcE1 / fcStar, c), cpZ = Cp(fcE2 / fcStar, c);
         return new CheckResult(member, actions, this, fcP * area, u, axis, mode, check,
             new AxisOutcome(member.EffectiveLengthYM, member.EffectiveLengthYM / member.RadiusYM, double.NaN, fcE1 * area, cpY, fcStar * cpY * area),
             new AxisOutcome(member.EffectiveLengthZM, member.EffectiveLengthZM / member.RadiusZM, double.NaN, fcE2 * area, cpZ, fcStar * cpZ * area),
             ltb ? new AxisOutcome(le, rb, double.NaN, double.NaN, cl, double.NaN) : default, trace);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void WriteTrace(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, NdsTimberMaterial mat, NdsAdjustments adj,
+        bool asd, double cd, double lam, double kfC, double kfB, double kfE, double phiC, double phiB, double phiS,
+        double fcRef, double fbRef, double eminRef, double fcStar, double eminP, double fbStar, double d1, double d2, double r1, double r2, double r,
+        double c, double fcE, double cp, double fcP, double fc, double m1, double m2, double fb1, double fb2, bool bending,
+        bool ltb, double le, double rb, double fbE, double cl, double fb1P, double fb2P, double fcE1, double fcE2, double u, double den1, double den2, bool unbounded)
+    {
+        string src = mat.Source;
+        trace.Note($"{mat.Name}: {ProductText(mat.Product)} reference design values from {src}; {(asd ? "ASD" : "LRFD")}.", src);
+        trace.Add("Fc", "reference compression design value parallel to grain", TimberRules.Input, fcRef, StepUnit.Stress, src);
+        trace.Add("Fb", "reference bending design value", TimberRules.Input, fbRef, StepUnit.Stress, src);
+        trace.Add("Emin", "reference modulus for beam and column stability", TimberRules.Input, eminRef, StepUnit.Stress, src);
+        TraceCommon.SectionAndLengths(trace, member);
+        if (asd)
+            trace.Add("CD", "load duration factor", _cd is null ? $"{TimberRules.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", cd, StepUnit.None, "NDS 2018 2.3.2, Table 2.3.2");
+        else
+        {
+            trace.Add("λ", "time effect factor", _lambda is null ? $"{TimberRules.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", lam, StepUnit.None, "NDS 2018 N.3.3, Table N3");
+            trace.Add("KF", "format conversion factor for Fc", "2.40", kfC, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
+            trace.Add("φc", "resistance factor for compression", "0.90", phiC, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
+            trace.Add("KF", "format conversion factor for Emin", "1.76", kfE, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
+            trace.Add("φs", "resistance factor for stability", "0.85", phiS, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
+        }
+        trace.Add("CM", "wet service factor on Fc", TimberRules.Input, adj.WetServiceFc, StepUnit.None, "NDS 2018 4.3.3");
+        trace.Add("Ct", "temperature factor on Fc", TimberRules.Input, adj.TemperatureFc, StepUnit.None, "NDS 2018 2.3.3");
+        trace.Add("CF", "size factor on Fc", TimberRules.Input, adj.SizeFc, StepUnit.None, "NDS 2018 4.3.6");
+        trace.Add("Ci", "incising factor on Fc", TimberRules.Input, adj.IncisingFc, StepUnit.None, "NDS 2018 4.3.8");
+        trace.Add("Fc*", "compression design value with all factors but Cp", asd ? "Fc CD CM Ct CF Ci" : "Fc CM Ct CF Ci KF φc λ", fcStar, StepUnit.Stress, "NDS 2018 3.7.1.5, Table 4.3.1");
+        trace.Add("CM", "wet service factor on Emin", TimberRules.Input, adj.WetServiceEmin, StepUnit.None, "NDS 2018 4.3.3");
+        trace.Add("Ct", "temperature factor on Emin", TimberRules.Input, adj.TemperatureEmin, StepUnit.None, "NDS 2018 2.3.3");
+        trace.Add("Ci", "incising factor on Emin", TimberRules.Input, adj.IncisingEmin, StepUnit.None, "NDS 2018 4.3.8");
+        trace.Add("E′min", "adjusted stability modulus", asd ? "Emin CM Ct Ci" : "Emin CM Ct Ci KF φs", eminP, StepUnit.Stress, "NDS 2018 Table 4.3.1");
+        if (member.SectionKind == SectionKind.SolidCircle)
+            trace.Note("Round column: designed as the square of equal area, d = D √π / 2.", "NDS 2018 3.7.3");
+        trace.Add("d1", "dimension for buckling about y", member.SectionKind == SectionKind.SolidCircle ? "D √π / 2" : "depth h", d1, StepUnit.Length, "NDS 2018 3.7.1.3");
+        trace.Add("d2", "dimension for buckling about z", member.SectionKind == SectionKind.SolidCircle ? "D √π / 2" : "width b", d2, StepUnit.Length, "NDS 2018 3.7.1.3");
+        trace.Add("le1/d1", "slenderness ratio about y", "Lcr,y / d1", r1, StepUnit.None, "NDS 2018 3.7.1.3");
+        trace.Add("le2/d2", "slenderness ratio about z", "Lcr,z / d2", r2, StepUnit.None, "NDS 2018 3.7.1.3");
+        trace.Add("le/d", "governing slenderness ratio", "max(le1/d1, le2/d2)", r, StepUnit.None, "NDS 2018 3.7.1.3");
+        trace.Add("(le/d)max", "slenderness limit", AllowsConstructionSlenderness ? "75 (during construction only)" : "50", SlendernessLimit, StepUnit.None, "NDS 2018 3.7.1.4");
+        trace.Add("FcE", "critical buckling design value", "0.822 E′min / (le/d)²", fcE, StepUnit.Stress, "NDS 2018 3.7.1.5 (3.7-1)");
+        trace.Add("c", "column constant", ProductText(mat.Product) + ": " + (c == 0.8 ? "0.8" : c == 0.85 ? "0.85" : "0.9"), c, StepUnit.None, "NDS 2018 3.7.1.5");
+        trace.Add("Cp", "column stability factor", "(1 + FcE/Fc*)/(2c) − √[((1 + FcE/Fc*)/(2c))² − (FcE/Fc*)/c]", cp, StepUnit.None, "NDS 2018 3.7.1.5 (3.7-1)");
+        trace.Add("F′c", "adjusted compression design value", "Fc* Cp", fcP, StepUnit.Stress, "NDS 2018 3.7.1");
+        TimberRules.Actions(trace, actions, m1, m2);
+        trace.Add("fc", "actual compression stress", "P / A", fc, StepUnit.Stress, "NDS 2018 3.6.3");
+        if (bending)
+        {
+            trace.Add("CM", "wet service factor on Fb", TimberRules.Input, adj.WetServiceFb, StepUnit.None, "NDS 2018 4.3.3");
+            trace.Add("Ct", "temperature factor on Fb", TimberRules.Input, adj.TemperatureFb, StepUnit.None, "NDS 2018 2.3.3");
+            trace.Add("CF", "size factor on Fb", TimberRules.Input, adj.SizeFb, StepUnit.None, "NDS 2018 4.3.6");
+            trace.Add("Ci", "incising factor on Fb", TimberRules.Input, adj.IncisingFb, StepUnit.None, "NDS 2018 4.3.8");
+            trace.Add("Cr", "repetitive member factor on Fb", TimberRules.Input, adj.Repetitive, StepUnit.None, "NDS 2018 4.3.9");
+            trace.Add("Cfu", "flat use factor on Fb about z", TimberRules.Input, adj.FlatUse, StepUnit.None, "NDS 2018 4.3.7");
+            if (!asd)
+            {
+                trace.Add("KF", "format conversion factor for Fb", "2.54", kfB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
+                trace.Add("φb", "resistance factor for bending", "0.85", phiB, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
+            }
+            trace.Add("Fb*", "bending design value with all factors but CL and Cfu", asd ? "Fb CD CM Ct CF Ci Cr" : "Fb CM Ct CF Ci Cr KF φb λ", fbStar, StepUnit.Stress, "NDS 2018 Table 4.3.1");
+            if (ltb)
+            {
+                trace.Add("lu", "laterally unsupported length (free to twist)", "K,twist × longest segment", member.EffectiveLengthTorsionalM, StepUnit.Length, "NDS 2018 3.3.3.4");
+                trace.Add("le", "effective length for bending", "Table 3.3.3, any loading: 2.06 lu, 1.63 lu + 3d or 1.84 lu", le, StepUnit.Length, "NDS 2018 3.3.3.5, Table 3.3.3");
+                trace.Add("RB", "slenderness ratio for bending", "√(le d / b²)", rb, StepUnit.None, "NDS 2018 3.3.3.6 (3.3-5)");
+                trace.Add("FbE", "critical buckling design value for bending", "1.20 E′min / RB²", fbE, StepUnit.Stress, "NDS 2018 3.3.3.8");
+                trace.Add("CL", "beam stability factor", "(1 + FbE/Fb*)/1.9 − √[((1 + FbE/Fb*)/1.9)² − (FbE/Fb*)/0.95]", cl, StepUnit.None, "NDS 2018 3.3.3.8 (3.3-6)");
+            }
+            else if (fb1 > 0)
+                trace.Note("Edgewise bending with depth not above breadth (or a round section): CL = 1.", "NDS 2018 3.3.3.1");
+            trace.Add("F′b1", "adjusted bending design value about y", "Fb* CL", fb1P, StepUnit.Stress, "NDS 2018 3.9.2");
+            trace.Add("F′b2", "adjusted bending design value about z", "Fb* Cfu", fb2P, StepUnit.Stress, "NDS 2018 3.9.2, 4.3.7");
+            trace.Add("fc(6e1/d1)", "edgewise bending stress from the end eccentricity (about y)", "My,Ed / Sy", fb1, StepUnit.Stress, "NDS 2018 15.4.1");
+            trace.Add("fc(6e2/d2)", "flatwise bending stress from the end eccentricity (about z)", "Mz,Ed / Sz", fb2, StepUnit.Stress, "NDS 2018 15.4.1");
+            trace.Add("FcE1", "critical buckling design value about y", "0.822 E′min / (le1/d1)²", fcE1, StepUnit.Stress, "NDS 2018 3.9.2");
+            trace.Add("FcE2", "critical buckling design value about z", "0.822 E′min / (le2/d2)²", fcE2, StepUnit.Stress, "NDS 2018 3.9.2");
+            trace.Add("1 − fc/FcE1", "amplification denominator about y", "1 − fc / FcE1", den1, StepUnit.None, "NDS 2018 3.9.2 (3.9-3), 15.4.1");
+            trace.Add("1 − fc/FcE2 − (fbe1/FbE)²", "amplification denominator about z", "1 − fc / FcE2 − (fc(6e1/d1) / FbE)²", den2, StepUnit.None, "NDS 2018 3.9.2 (3.9-4), 15.4.1");
+            if (unbounded)
+                trace.Note("An amplification denominator is not positive (fc ≥ FcE1, fc/FcE2 + (fbe1/FbE)² ≥ 1 or fbe1 ≥ FbE): the member is unstable and fails.", "NDS 2018 3.9.2");
+            trace.Add("u", "eccentric axial compression (no side loads)",
+                "(fc/F′c)² + fbe1 [1 + 0.234 fc/FcE1] / [F′b1 (1 − fc/FcE1)] + fbe2 [1 + 0.234 fc/FcE2 + 0.234 (fbe1/FbE)²] / [F′b2 (1 − fc/FcE2 − (fbe1/FbE)²)], fbe = fc 6e/d",
+                u, StepUnit.None, "NDS 2018 15.4.1 (15.4-1), with 3.9.2");
+        }
+        else
+            trace.Add("u", "utilisation in compression", "fc / F′c", u, StepUnit.None, "NDS 2018 3.6.3, 3.7.1");
     }
 
     private static string ProductText(NdsProduct p) => p switch

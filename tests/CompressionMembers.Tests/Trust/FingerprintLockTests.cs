@@ -1,0 +1,62 @@
+using System.Collections.Generic;
+using CompressionMembers.Actions;
+using CompressionMembers.Materials;
+using CompressionMembers.Materials.Aluminium;
+using CompressionMembers.Materials.Timber;
+using CompressionMembers.Members;
+using CompressionMembers.Methods;
+using CompressionMembers.Reporting;
+using CompressionMembers.Restraints;
+using CompressionMembers.Sections;
+using UnitsNet;
+using Xunit.Abstractions;
+
+namespace CompressionMembers.Tests.Trust;
+
+/// <summary>
+/// Locked input fingerprints, one per material family and per section kind: an unchanged input must keep its
+/// fingerprint in every later release (docs/reproducibility.md). A change here is a change of the canonical form and
+/// must come with a new prefix ("c2-") and a CHANGELOG entry, never with a silently edited value.
+/// </summary>
+public class FingerprintLockTests(ITestOutputHelper output)
+{
+    private static Length Mm(double v) => Length.FromMillimeters(v);
+
+    private static readonly DesignActions Actions = DesignActions.Compression(Force.FromKilonewtons(25), "locked case").WithLoadDuration(LoadDurationClass.MediumTerm);
+
+    private static Member Pinned(Section s, Material m) => Member.Create(s, m, Mm(2500), Restraint.PinnedBothAxes, "locked member");
+
+    public static IEnumerable<object[]> Locked()
+    {
+        var steel = IsotropicMaterial.GenericStructuralSteel;
+        // Material families, each on a 100 × 150 rectangle (the aluminium on a tube), with a method of its family.
+        yield return ["isotropic", Pinned(new RectangleSection(Mm(100), Mm(150)), steel), ResistanceMethods.Euler, "c1-08f29b665ed05203"];
+        yield return ["timber EN 338", Pinned(new RectangleSection(Mm(100), Mm(150)), TimberGrades.C24), ResistanceMethods.Ec5Column, "c1-33468857d4b3ebbd"];
+        yield return ["timber glulam", Pinned(new RectangleSection(Mm(100), Mm(150)), TimberGrades.GL28h), ResistanceMethods.Ec5FireR30, "c1-b74d7fd17173a314"];
+        yield return ["timber NDS", Pinned(new RectangleSection(Mm(100), Mm(150)), NdsGrades.DouglasFirLarchNo2), ResistanceMethods.NdsColumnAsd, "c1-c3f7d6605d0ee1f2"];
+        yield return ["aluminium", Pinned(new RectangularHollowSection(Mm(100), Mm(100), Mm(4)), AluminiumAlloys.EnAw6082T6Extrusion), ResistanceMethods.Eurocode9, "c1-ba2fee92fde5bc36"];
+        yield return ["aluminium buckling constants", Pinned(new RectangularHollowSection(Mm(100), Mm(100), Mm(4)), AluminiumAlloys.EnAw6061T6Extrusion), ResistanceMethods.AluminiumBucklingConstantsAsd, "c1-a02fe3a7ab578366"];
+        // Section kinds, all in the same steel under Euler.
+        yield return ["rectangle", Pinned(new RectangleSection(Mm(60), Mm(90)), steel), ResistanceMethods.Euler, "c1-577d75ff798c8ace"];
+        yield return ["circle", Pinned(new CircleSection(Mm(60)), steel), ResistanceMethods.Euler, "c1-ed8479cbf0f34d45"];
+        yield return ["round tube", Pinned(new CircularHollowSection(Mm(88.9), Mm(4)), steel), ResistanceMethods.Euler, "c1-42b562c6a311a18e"];
+        yield return ["box tube", Pinned(new RectangularHollowSection(Mm(120), Mm(80), Mm(5)), steel), ResistanceMethods.Euler, "c1-1b0fb7a14e11d7f2"];
+        yield return ["I", Pinned(new ISection(Mm(200), Mm(100), Mm(8.5), Mm(5.6), Mm(12)), steel), ResistanceMethods.Euler, "c1-f6b92ebb337ce503"];
+        yield return ["channel", Pinned(new ChannelSection(Mm(150), Mm(75), Mm(10), Mm(6)), steel), ResistanceMethods.Euler, "c1-a5095755da844e27"];
+        yield return ["angle", Pinned(new AngleSection(Mm(80), Mm(60), Mm(8)), steel), ResistanceMethods.Euler, "c1-976592c4a6b25b8f"];
+        yield return ["tee", Pinned(new TeeSection(Mm(100), Mm(100), Mm(10), Mm(8)), steel), ResistanceMethods.Euler, "c1-5b535c6395ae3a22"];
+        yield return ["polygon", Pinned(new PolygonSection([new SectionPoint(Mm(0), Mm(0)), new SectionPoint(Mm(80), Mm(0)), new SectionPoint(Mm(0), Mm(60))]), steel), ResistanceMethods.Euler, "c1-d6e632722c283a0f"];
+        yield return ["by properties", Pinned(new SectionByProperties("user section", Area.FromSquareMillimeters(2000), AreaMomentOfInertia.FromMillimetersToTheFourth(4e6),
+            AreaMomentOfInertia.FromMillimetersToTheFourth(1.5e6), Mm(75), Mm(40)), steel), ResistanceMethods.Euler, "c1-de03d62bd8d684b7"];
+    }
+
+    [Theory]
+    [MemberData(nameof(Locked))]
+    public void Fingerprint_OfAnUnchangedInput_IsLocked(string family, Member member, IResistanceMethod method, string expected)
+    {
+        string actual = InputFingerprint.Compute(member, Actions, method);
+        output.WriteLine($"{family}: {actual}");
+        output.WriteLine(InputFingerprint.CanonicalText(member, Actions, method));
+        Assert.Equal(expected, actual);
+    }
+}
