@@ -51,7 +51,7 @@ public class SizeSelectionTests
         Assert.Equal("heavy", r.Chosen.GoverningCase);
     }
 
-    public static TheoryData<string> Methods => new() { "Euler", "Johnson", "Perry" };
+    public static TheoryData<string> Methods => new() { "Euler", "Johnson", "Perry", "Secant" };
 
     private static IResistanceMethod MethodNamed(string n) => n switch
     {
@@ -73,7 +73,7 @@ public class SizeSelectionTests
         {
             var member = WorkflowFixtures.Column(lMm).WithRestraint(CompressionMembers.Restraints.Restraint.Same(CompressionMembers.Restraints.AxisRestraint.FromBucklingFactor(k)));
             var a = DesignActions.Compression(Force.FromKilonewtons(nKn));
-            // Eccentricities of at least 1 mm: the secant formula is for eccentric loads (see the report for e → 0).
+            // Eccentricities of at least 1 mm: the secant formula is for eccentric loads.
             if (methodName == "Secant") a = a.WithEccentricity(Length.FromMillimeters(eMm), Length.FromMillimeters(eMm / 2));
             var req = new SizingRequest(member, a);
             foreach (var sel in new[] { mass, area })
@@ -88,15 +88,6 @@ public class SizeSelectionTests
             }
         }, iter: 60);
     }
-
-    // The secant kernel on main (after "Secant inverse: bracket the root by the secant's own monotone sandwich") returns
-    // the Euler load for some eccentric tubes, e.g. CHS 100x5, L = 3543.89 mm, K = 1.114, e = 11/5.5 mm: N_Rd = 213.7 kN =
-    // π²EI/L_cr² (hand calculation), far above CHS 100x4 (102.1 kN) and CHS 120x5 (191.2 kN); it also throws
-    // NonConvergenceException for CHS 50x5 at L = 2150 mm, e = 1/0.5 mm. Not monotone in size, so the pruned search cannot
-    // match brute force. Reported to the lead; re-enable when the kernel is fixed.
-    [Theory]
-    [InlineData("Secant")]
-    public void Select_RandomCases_PrunedEqualsExhaustive_Secant(string methodName) => Select_RandomCases_PrunedEqualsExhaustive(methodName);
 
     [Fact]
     public void Select_LargeScaledCatalogue_TakesAtLeastTwentyTimesFewerEvaluations()
