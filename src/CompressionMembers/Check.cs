@@ -27,9 +27,7 @@ public static class Check
         ArgumentNullException.ThrowIfNull(member);
         ArgumentNullException.ThrowIfNull(actions);
         ArgumentNullException.ThrowIfNull(method);
-        var rm = ResolvedMember.From(member);
-        var ra = ResolvedActions.From(actions);
-        return Evaluate(rm, ra, method, null);
+        return Evaluate(in member.Resolved, in actions.Resolved, method, null);
     }
 
     /// <summary>Checks a member and records every step, for a report.</summary>
@@ -45,7 +43,7 @@ public static class Check
         ArgumentNullException.ThrowIfNull(member);
         ArgumentNullException.ThrowIfNull(actions);
         ArgumentNullException.ThrowIfNull(method);
-        return Evaluate(ResolvedMember.From(member), ResolvedActions.From(actions), method, new CalculationTrace());
+        return Evaluate(in member.Resolved, in actions.Resolved, method, new CalculationTrace());
     }
 
     /// <summary>Checks an already resolved member: the path for sweeps that resolve once and evaluate many times.</summary>

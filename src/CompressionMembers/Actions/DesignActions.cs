@@ -1,5 +1,6 @@
 using System;
 using CompressionMembers.Internal;
+using CompressionMembers.Resolution;
 using UnitsNet;
 
 namespace CompressionMembers.Actions;
@@ -35,7 +36,13 @@ public sealed class DesignActions
         LoadDuration = duration;
         InSi = new SiValues(axial.Newtons, ey.Meters, ez.Meters, myTop.NewtonMeters, myBottom.NewtonMeters, mzTop.NewtonMeters, mzBottom.NewtonMeters,
             bowY?.Meters ?? 0, bowZ?.Meters ?? 0);
+        _resolved = new ResolvedActions(this);   // resolved once: every check reads these SI doubles
     }
+
+    private readonly ResolvedActions _resolved;
+
+    /// <summary>The actions in SI doubles, resolved once at construction (read by reference: no copy per check).</summary>
+    internal ref readonly ResolvedActions Resolved => ref _resolved;
 
     // SI values converted once at construction, so that resolving the actions costs no unit conversion.
     internal readonly record struct SiValues(double AxialForceN, double EccentricityYM, double EccentricityZM, double EndMomentYTopNm,

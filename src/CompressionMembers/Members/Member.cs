@@ -1,6 +1,7 @@
 using System;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials;
+using CompressionMembers.Resolution;
 using CompressionMembers.Restraints;
 using CompressionMembers.Sections;
 using UnitsNet;
@@ -28,7 +29,13 @@ public sealed class Member
         EffectiveLengthYM = restraint.AboutY.BucklingFactor * restraint.AboutY.LongestSegmentM(l, "y", nameof(restraint));
         EffectiveLengthZM = restraint.AboutZ.BucklingFactor * restraint.AboutZ.LongestSegmentM(l, "z", nameof(restraint));
         EffectiveLengthTorsionalM = restraint.Torsional.BucklingFactor * restraint.Torsional.LongestSegmentM(l, "the member axis (twist)", nameof(restraint));
+        _resolved = new ResolvedMember(this);   // resolved once: every check reads these SI doubles
     }
+
+    private readonly ResolvedMember _resolved;
+
+    /// <summary>The member in SI doubles, resolved once at construction (read by reference: no copy per check).</summary>
+    internal ref readonly ResolvedMember Resolved => ref _resolved;
 
     /// <summary>Creates a member.</summary>
     /// <param name="section">The cross-section.</param>

@@ -6,12 +6,13 @@ namespace CompressionMembers.Resolution;
 
 /// <summary>Design actions resolved once into SI doubles (N, m, N·m): what a method kernel reads.</summary>
 /// <remarks>Conventions as <see cref="DesignActions"/>: compression positive; eccentricity "Y" bends about y.
-/// A missing initial bow is 0 with <see cref="HasInitialBowY"/> false. The default value has a null
+/// A missing initial bow is 0 with <see cref="HasInitialBowY"/> false. Actions are resolved once, when they are created;
+/// <see cref="From"/> returns that value. The default value has a null
 /// <see cref="Actions"/>; methods reject it. Thread safety: immutable value type.</remarks>
 [Immutable]
 public readonly struct ResolvedActions
 {
-    private ResolvedActions(DesignActions a)
+    internal ResolvedActions(DesignActions a)
     {
         Actions = a;
         var si = a.InSi;
@@ -36,7 +37,7 @@ public readonly struct ResolvedActions
     public static ResolvedActions From(DesignActions actions)
     {
         ArgumentNullException.ThrowIfNull(actions);
-        return new ResolvedActions(actions);
+        return actions.Resolved;
     }
 
     /// <summary>The actions this was resolved from.</summary>

@@ -13,13 +13,16 @@ namespace CompressionMembers.Resolution;
 /// <remarks>
 /// <para>Names carry their unit: <c>AreaM2</c>, <c>SecondMomentYM4</c>, <c>ElasticModulusPa</c>. Axes y and z are the
 /// principal axes of the section (see <see cref="Section"/>).</para>
+/// <para>A member is resolved once, when it is created: <see cref="From"/> returns that value, so a check pays no unit
+/// conversion and no re-computation of the member's own properties (radii of gyration, slenderness, Euler critical
+/// forces, section moduli). Methods read these instead of computing them again, so every method sees the same bits.</para>
 /// <para>The default value has a null <see cref="Member"/> and zeros everywhere; methods reject it. Use
 /// <see cref="From"/>. Thread safety: immutable value type.</para>
 /// </remarks>
 [Immutable]
 public readonly struct ResolvedMember
 {
-    private ResolvedMember(Member member)
+    internal ResolvedMember(Member member)
     {
         Member = member;
         var m = member.Material;
@@ -45,6 +48,15 @@ public readonly struct ResolvedMember
         EffectiveLengthYM = member.EffectiveLengthYM;
         EffectiveLengthZM = member.EffectiveLengthZM;
         EffectiveLengthTorsionalM = member.EffectiveLengthTorsionalM;
+        // Derived once here; the expressions are those the methods used to evaluate on every check (same bits).
+        RadiusYM = Math.Sqrt(SecondMomentYM4 / AreaM2);
+        RadiusZM = Math.Sqrt(SecondMomentZM4 / AreaM2);
+        SlendernessY = EffectiveLengthYM / RadiusYM;
+        SlendernessZ = EffectiveLengthZM / RadiusZM;
+        CriticalForceYN = Math.PI * Math.PI * ElasticModulusPa * SecondMomentYM4 / (EffectiveLengthYM * EffectiveLengthYM);
+        CriticalForceZN = Math.PI * Math.PI * ElasticModulusPa * SecondMomentZM4 / (EffectiveLengthZM * EffectiveLengthZM);
+        SectionModulusYM3 = SecondMomentYM4 / Math.Max(FibrePositiveZM, FibreNegativeZM);
+        SectionModulusZM3 = SecondMomentZM4 / Math.Max(FibrePositiveYM, FibreNegativeYM);
     }
 
     /// <summary>Resolves a member to SI doubles.</summary>
@@ -54,7 +66,7 @@ public readonly struct ResolvedMember
     public static ResolvedMember From(Member member)
     {
         ArgumentNullException.ThrowIfNull(member);
-        return new ResolvedMember(member);
+        return member.Resolved;
     }
 
     /// <summary>The member this was resolved from (families read their own values from its material and section).</summary>
@@ -102,10 +114,22 @@ public readonly struct ResolvedMember
     /// <summary>Effective length for torsional buckling, m.</summary>
     public double EffectiveLengthTorsionalM { get; }
 
-    /// <summary>Radius of gyration about y, m.</summary>
-    public double RadiusYM => Math.Sqrt(SecondMomentYM4 / AreaM2);
-    /// <summary>Radius of gyration about z, m.</summary>
-    public double RadiusZM => Math.Sqrt(SecondMomentZM4 / AreaM2);
+    /// <summary>Radius of gyration about y, √(Iy / A), m.</summary>
+    public double RadiusYM { get; }
+    /// <summary>Radius of gyration about z, √(Iz / A), m.</summary>
+    public double RadiusZM { get; }
+    /// <summary>Geometric slenderness about y, Lcr,y / iy.</summary>
+    public double SlendernessY { get; }
+    /// <summary>Geometric slenderness about z, Lcr,z / iz.</summary>
+    public double SlendernessZ { get; }
+    /// <summary>Euler critical force about y with the stability modulus, π² E Iy / Lcr,y², N.</summary>
+    public double CriticalForceYN { get; }
+    /// <summary>Euler critical force about z with the stability modulus, π² E Iz / Lcr,z², N.</summary>
+    public double CriticalForceZN { get; }
+    /// <summary>The smaller elastic section modulus about y, Iy / max(z+, z−), m³.</summary>
+    public double SectionModulusYM3 { get; }
+    /// <summary>The smaller elastic section modulus about z, Iz / max(y+, y−), m³.</summary>
+    public double SectionModulusZM3 { get; }
     /// <summary>Whether the torsion constant, warping constant and shear centre are all known.</summary>
     public bool HasTorsionalProperties => double.IsFinite(TorsionConstantM4) && double.IsFinite(WarpingConstantM6)
         && double.IsFinite(ShearCentreYM) && double.IsFinite(ShearCentreZM);

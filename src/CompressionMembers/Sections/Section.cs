@@ -37,6 +37,11 @@ public abstract class Section
         Props = props;
     }
 
+    /// <summary>The EN 1999-1-1 classifications of this section, one per alloy and welding, computed on first use and
+    /// published atomically (see <c>Ec9ClassificationCache</c>). A memo of values that follow from the immutable section
+    /// alone: it never changes what the section is or reports.</summary>
+    internal Methods.Aluminium.Ec9SectionEntry[]? Ec9Entries;
+
     private static ArgumentOutOfRangeException Unrepresentable(string paramName, string message) => new(paramName, message);
 
     private static bool Usable(double v) => double.IsFinite(v) && v > 0 && double.IsNormal(v);

@@ -1,5 +1,6 @@
 using System;
 using System.Runtime.CompilerServices;
+using System.Threading;
 using CompressionMembers.Materials.Aluminium;
 using CompressionMembers.Sections;
 
@@ -39,16 +40,18 @@ internal sealed class Ec9SectionEntry
 
 /// <summary>
 /// A per-section cache of <see cref="Ec9SectionEntry"/>, so that a member checked many times (parametric studies, load
-/// cases) is classified once, not twice per check (applicability and evaluation). Keyed weakly by the section (an
-/// immutable class): an entry lives as long as its section does. Each section keeps a small immutable array of entries
-/// (one per alloy and welding); a new entry replaces the array atomically (<see cref="ConditionalWeakTable{TKey, TValue}.AddOrUpdate"/>).
-/// Two threads that miss at once both compute the same deterministic entry and one of them is kept, so every
-/// thread sees bit-identical values. Thread safety: safe from any number of threads.
+/// cases) is classified once, not twice per check (applicability and evaluation). The entries hang on the section
+/// itself (<see cref="Section.Ec9Entries"/>, an internal slot): an entry lives as long as its section does, and a hit is
+/// one field read and a short scan, with no hashing or weak-table lookup. Each section keeps a small immutable array of
+/// entries (one per alloy and welding); a new entry is published with a compare-and-swap, retried when another thread
+/// published first, so no entry is ever lost to a race (a thread that found its entry once keeps finding it). Two
+/// threads that miss at once both compute the same deterministic entry and one of them is kept, so every thread sees
+/// bit-identical values. Past <see cref="MaxEntriesPerSection"/> combinations the array starts afresh. Thread safety:
+/// safe from any number of threads.
 /// </summary>
 internal static class Ec9ClassificationCache
 {
-    private const int MaxEntriesPerSection = 8;
-    private static readonly ConditionalWeakTable<Section, Ec9SectionEntry[]> Table = new();
+    internal const int MaxEntriesPerSection = 32;
 
     /// <summary>When true on the current thread, <see cref="Get"/> classifies afresh and stores nothing (tests compare
     /// the cached and uncached results with it).</summary>
@@ -57,22 +60,36 @@ internal static class Ec9ClassificationCache
     internal static Ec9SectionEntry Get(Section section, AluminiumAlloy alloy, bool welded)
     {
         if (BypassOnThisThread) return new Ec9SectionEntry(section, alloy, welded);
-        Table.TryGetValue(section, out var entries);
+        var entries = Volatile.Read(ref section.Ec9Entries);
         if (entries is not null)
         {
             foreach (var e in entries)
                 if (ReferenceEquals(e.Alloy, alloy) && e.Welded == welded) return e;
         }
+        return Add(section, alloy, welded, entries);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Ec9SectionEntry Add(Section section, AluminiumAlloy alloy, bool welded, Ec9SectionEntry[]? seen)
+    {
         var fresh = new Ec9SectionEntry(section, alloy, welded);
-        Ec9SectionEntry[] next;
-        if (entries is null || entries.Length >= MaxEntriesPerSection) next = [fresh];
-        else
+        while (true)
         {
-            next = new Ec9SectionEntry[entries.Length + 1];
-            entries.CopyTo(next, 0);
-            next[^1] = fresh;
+            Ec9SectionEntry[] next;
+            if (seen is null || seen.Length >= MaxEntriesPerSection) next = [fresh];
+            else
+            {
+                next = new Ec9SectionEntry[seen.Length + 1];
+                seen.CopyTo(next, 0);
+                next[^1] = fresh;
+            }
+            var found = Interlocked.CompareExchange(ref section.Ec9Entries, next, seen);
+            if (ReferenceEquals(found, seen)) return fresh;
+            // Another thread published first: keep its entry if it is ours, else add ours to what it published.
+            seen = found;
+            if (seen is not null)
+                foreach (var e in seen)
+                    if (ReferenceEquals(e.Alloy, alloy) && e.Welded == welded) return e;
         }
-        Table.AddOrUpdate(section, next);
-        return fresh;
     }
 }

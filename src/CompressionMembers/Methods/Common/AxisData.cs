@@ -13,9 +13,10 @@ internal readonly struct AxisData
         bool y = axis == BucklingAxis.Y;
         SecondMomentM4 = y ? m.SecondMomentYM4 : m.SecondMomentZM4;
         EffectiveLengthM = y ? m.EffectiveLengthYM : m.EffectiveLengthZM;
-        RadiusM = Math.Sqrt(SecondMomentM4 / m.AreaM2);
-        Slenderness = EffectiveLengthM / RadiusM;
-        CriticalForceN = Math.PI * Math.PI * m.ElasticModulusPa * SecondMomentM4 / (EffectiveLengthM * EffectiveLengthM);
+        // Resolved once with the member (the same expressions): √(I/A), Lcr/i, π² E I / Lcr².
+        RadiusM = y ? m.RadiusYM : m.RadiusZM;
+        Slenderness = y ? m.SlendernessY : m.SlendernessZ;
+        CriticalForceN = y ? m.CriticalForceYN : m.CriticalForceZN;
         FibrePositiveM = y ? m.FibrePositiveZM : m.FibrePositiveYM;
         FibreNegativeM = y ? m.FibreNegativeZM : m.FibreNegativeYM;
     }

@@ -61,8 +61,8 @@ internal static class TimberRules
         hM = m.FibrePositiveZM + m.FibreNegativeZM;
     }
 
-    internal static double ModulusY(in ResolvedMember m) => m.SecondMomentYM4 / Math.Max(m.FibrePositiveZM, m.FibreNegativeZM);
-    internal static double ModulusZ(in ResolvedMember m) => m.SecondMomentZM4 / Math.Max(m.FibrePositiveYM, m.FibreNegativeYM);
+    internal static double ModulusY(in ResolvedMember m) => m.SectionModulusYM3;
+    internal static double ModulusZ(in ResolvedMember m) => m.SectionModulusZM3;
 
     internal static void Actions(CalculationTrace t, in ResolvedActions a, double myNm, double mzNm)
     {
