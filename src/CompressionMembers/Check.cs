@@ -21,13 +21,19 @@ public static class Check
     /// <returns>The result (Passed false with the utilisation when the member fails).</returns>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="MethodNotApplicableException">The method does not cover the member or actions.</exception>
-    /// <exception cref="InvalidOperationException">The method returned a non-finite or negative resistance (a broken method).</exception>
+    /// <exception cref="InvalidOperationException">The method built a result with a non-finite or negative resistance, or a
+    /// negative or NaN utilisation (a broken method; the <see cref="CheckResult"/> constructor refuses it).</exception>
     public static CheckResult Evaluate(Member member, DesignActions actions, IResistanceMethod method)
     {
         ArgumentNullException.ThrowIfNull(member);
         ArgumentNullException.ThrowIfNull(actions);
         ArgumentNullException.ThrowIfNull(method);
-        return Evaluate(in member.Resolved, in actions.Resolved, method, null);
+        ref readonly var rm = ref member.Resolved;
+        ref readonly var ra = ref actions.Resolved;
+        var verdict = method.AppliesTo(rm, ra);
+        if (!verdict.IsApplicable) ThrowNotApplicable(method, member, verdict.Reason!);
+        // The result checked its own values when it was built, so it is handed on as it is (no copy).
+        return method.Evaluate(rm, ra, null);
     }
 
     /// <summary>Checks a member and records every step, for a report.</summary>
@@ -37,7 +43,8 @@ public static class Check
     /// <returns>The result with its steps.</returns>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="MethodNotApplicableException">The method does not cover the member or actions.</exception>
-    /// <exception cref="InvalidOperationException">The method returned a non-finite or negative resistance.</exception>
+    /// <exception cref="InvalidOperationException">The method built a result with a non-finite or negative resistance, or a
+    /// negative or NaN utilisation.</exception>
     public static CheckResult EvaluateWithTrace(Member member, DesignActions actions, IResistanceMethod method)
     {
         ArgumentNullException.ThrowIfNull(member);
@@ -55,7 +62,8 @@ public static class Check
     /// <exception cref="ArgumentException">A resolved value is <c>default</c>.</exception>
     /// <exception cref="ArgumentNullException"><paramref name="method"/> is null.</exception>
     /// <exception cref="MethodNotApplicableException">The method does not cover the member or actions.</exception>
-    /// <exception cref="InvalidOperationException">The method returned a non-finite or negative resistance.</exception>
+    /// <exception cref="InvalidOperationException">The method built a result with a non-finite or negative resistance, or a
+    /// negative or NaN utilisation.</exception>
     public static CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, IResistanceMethod method, CalculationTrace? trace)
     {
         ArgumentNullException.ThrowIfNull(method);
@@ -63,16 +71,10 @@ public static class Check
         if (!actions.IsValid) throw new ArgumentException("The resolved actions are default; use ResolvedActions.From(actions).", nameof(actions));
         var verdict = method.AppliesTo(member, actions);
         if (!verdict.IsApplicable) ThrowNotApplicable(method, member.Member, verdict.Reason!);
-        var result = method.Evaluate(member, actions, trace);
-        if (!double.IsFinite(result.DesignResistanceN) || result.DesignResistanceN < 0 || double.IsNaN(result.Utilisation) || result.Utilisation < 0)
-            ThrowBroken(method, result);
-        return result;
+        return method.Evaluate(member, actions, trace);
     }
 
     private static void ThrowNotApplicable(IResistanceMethod method, Member member, string reason) =>
         throw new MethodNotApplicableException(method, member, reason);
 
-    private static void ThrowBroken(IResistanceMethod method, in CheckResult r) =>
-        throw new InvalidOperationException(
-            $"{method.Identity.Name} returned resistance {r.DesignResistanceN} N and utilisation {r.Utilisation} for \"{r.Member?.Name}\": a method must return a finite, non-negative resistance and utilisation.");
 }

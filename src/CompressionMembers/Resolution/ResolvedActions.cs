@@ -28,6 +28,8 @@ public readonly struct ResolvedActions
         InitialBowYM = si.InitialBowYM;
         InitialBowZM = si.InitialBowZM;
         LoadDuration = a.LoadDuration;
+        HasEndMoments = EndMomentYTopNm != 0 || EndMomentYBottomNm != 0 || EndMomentZTopNm != 0 || EndMomentZBottomNm != 0;
+        HasEccentricity = EccentricityYM != 0 || EccentricityZM != 0;
     }
 
     /// <summary>Resolves design actions to SI doubles.</summary>
@@ -68,9 +70,9 @@ public readonly struct ResolvedActions
     public LoadDurationClass LoadDuration { get; }
 
     /// <summary>Whether any end moment is non-zero.</summary>
-    public bool HasEndMoments => EndMomentYTopNm != 0 || EndMomentYBottomNm != 0 || EndMomentZTopNm != 0 || EndMomentZBottomNm != 0;
+    public bool HasEndMoments { get; }
     /// <summary>Whether any eccentricity is non-zero.</summary>
-    public bool HasEccentricity => EccentricityYM != 0 || EccentricityZM != 0;
+    public bool HasEccentricity { get; }
     /// <summary>Whether this value came from <see cref="From"/> (false for <c>default</c>).</summary>
     public bool IsValid => Actions is not null;
 }

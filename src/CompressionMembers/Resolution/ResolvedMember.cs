@@ -53,6 +53,9 @@ public readonly struct ResolvedMember
         RadiusZM = Math.Sqrt(SecondMomentZM4 / AreaM2);
         SlendernessY = EffectiveLengthYM / RadiusYM;
         SlendernessZ = EffectiveLengthZM / RadiusZM;
+        double root = Math.Sqrt(StrengthPa / ElasticModulusPa);
+        RelativeSlendernessY = SlendernessY / Math.PI * root;
+        RelativeSlendernessZ = SlendernessZ / Math.PI * root;
         CriticalForceYN = Math.PI * Math.PI * ElasticModulusPa * SecondMomentYM4 / (EffectiveLengthYM * EffectiveLengthYM);
         CriticalForceZN = Math.PI * Math.PI * ElasticModulusPa * SecondMomentZM4 / (EffectiveLengthZM * EffectiveLengthZM);
         SectionModulusYM3 = SecondMomentYM4 / Math.Max(FibrePositiveZM, FibreNegativeZM);
@@ -122,6 +125,11 @@ public readonly struct ResolvedMember
     public double SlendernessY { get; }
     /// <summary>Geometric slenderness about z, Lcr,z / iz.</summary>
     public double SlendernessZ { get; }
+    /// <summary>Relative slenderness about y with the member's strength and stability modulus, λ̄y = λy / π × √(f / E)
+    /// (= √(A f / Ncr,y); EN 1995-1-1 (6.21) for timber). Methods whose code defines it otherwise compute their own.</summary>
+    public double RelativeSlendernessY { get; }
+    /// <summary>Relative slenderness about z, λ̄z = λz / π × √(f / E).</summary>
+    public double RelativeSlendernessZ { get; }
     /// <summary>Euler critical force about y with the stability modulus, π² E Iy / Lcr,y², N.</summary>
     public double CriticalForceYN { get; }
     /// <summary>Euler critical force about z with the stability modulus, π² E Iz / Lcr,z², N.</summary>

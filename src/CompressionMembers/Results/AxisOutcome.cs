@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using UnitsNet;
 
 namespace CompressionMembers.Results;
@@ -15,6 +16,7 @@ public readonly struct AxisOutcome
     /// <param name="criticalForceN">Elastic critical force, N.</param>
     /// <param name="reductionFactor">Reduction factor (χ, kc, Cp…), or NaN.</param>
     /// <param name="resistanceN">Resistance for this axis or mode, N.</param>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public AxisOutcome(double effectiveLengthM, double slenderness, double relativeSlenderness, double criticalForceN,
         double reductionFactor, double resistanceN)
     {

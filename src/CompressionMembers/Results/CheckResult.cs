@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Globalization;
 using CompressionMembers.Actions;
 using CompressionMembers.Members;
 using CompressionMembers.Methods;
@@ -39,6 +40,9 @@ public readonly struct CheckResult
     /// <param name="aboutZ">Outcome about z (default if not checked).</param>
     /// <param name="torsional">Outcome for torsional or flexural-torsional buckling (default if not checked).</param>
     /// <param name="trace">The trace the steps were written to, or null.</param>
+    /// <exception cref="InvalidOperationException">The resistance is negative or not finite, or the utilisation is negative
+    /// or NaN: the method that builds such a result is broken. (Checked here, once, so that <see cref="Check"/> can hand the
+    /// result on without copying it.)</exception>
     public CheckResult(in ResolvedMember member, in ResolvedActions actions, IResistanceMethod method,
         double designResistanceN, double utilisation, BucklingAxis governingAxis, FailureMode governingMode, string governingCheck,
         AxisOutcome aboutY, AxisOutcome aboutZ, AxisOutcome torsional, CalculationTrace? trace)
@@ -55,7 +59,13 @@ public readonly struct CheckResult
         AboutZ = aboutZ;
         Torsional = torsional;
         Steps = trace is null ? NoSteps : trace.Steps;
+        if (!(designResistanceN >= 0) || double.IsPositiveInfinity(designResistanceN) || !(utilisation >= 0))
+            ThrowBroken(method, member.Member, designResistanceN, utilisation);
     }
+
+    private static void ThrowBroken(IResistanceMethod method, Member member, double resistanceN, double utilisation) =>
+        throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture,
+            $"{method?.Identity.Name ?? "A method"} returned resistance {resistanceN} N and utilisation {utilisation} for \"{member?.Name}\": a method must return a finite, non-negative resistance and a utilisation that is neither negative nor NaN."));
 
     /// <summary>The member checked.</summary>
     public Member Member { get; }

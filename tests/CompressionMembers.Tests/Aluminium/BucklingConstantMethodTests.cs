@@ -93,4 +93,13 @@ public class BucklingConstantMethodTests
         Assert.Equal("resistanceFactor", ex.ParamName);
         Assert.Contains("between 0 and 1; got 1.5", ex.Message);
     }
+
+    [Fact]
+    public void Evaluate_TracingOff_AllocatesNothing()
+    {
+        var rm = Resolution.ResolvedMember.From(Pinned(Rhs100x5, A6082T6, 3000));
+        var ra = Resolution.ResolvedActions.From(Kn(40));
+        Assert.Equal(0, Allocations.OfChecks(rm, ra, ResistanceMethods.AluminiumBucklingConstantsLrfd));
+        Assert.Equal(0, Allocations.OfChecks(rm, ra, ResistanceMethods.AluminiumBucklingConstantsAsd));
+    }
 }

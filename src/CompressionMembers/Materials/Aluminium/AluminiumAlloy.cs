@@ -132,7 +132,9 @@ public sealed class AluminiumAlloy : Material
     /// <exception cref="System.ArgumentOutOfRangeException">The process is not MIG or TIG.</exception>
     public double HazUltimateFactor(WeldingProcess process) => CheckedProcess(process) == WeldingProcess.Tig ? HazUltimateFactorTig : HazUltimateFactorMig;
 
-    private static WeldingProcess CheckedProcess(WeldingProcess process) => System.Enum.IsDefined(process)
+    // An explicit test, not Enum.IsDefined: this runs inside every EN 1999-1-1 check, and Enum.IsDefined reads a per-type
+    // cache that the runtime may drop under memory pressure and rebuild (an allocation on the hot path).
+    private static WeldingProcess CheckedProcess(WeldingProcess process) => process is WeldingProcess.Mig or WeldingProcess.Tig
         ? process
         : throw new System.ArgumentOutOfRangeException(nameof(process), process, $"Unknown welding process {(int)process}; use MIG or TIG.");
 

@@ -43,6 +43,7 @@ public sealed class TimberMaterial : Material
         FmkPa = fmk.Pascals;
         E0MeanPa = em;
         GMeanPa = gmean.Pascals;
+        SlendernessRoot = Math.Sqrt(CompressiveStrengthPa / ElasticModulusPa);
         RhokKgM3 = rhok.KilogramsPerCubicMeter;
         BendingStrength = fmk;
         TensionStrength = ft0k;
@@ -116,6 +117,8 @@ public sealed class TimberMaterial : Material
     internal double FmkPa { get; }
     internal double E0MeanPa { get; }
     internal double GMeanPa { get; }
+    /// <summary>√(fc,0,k / E0,05), the material's factor in the relative slenderness of EN 1995-1-1 (6.21, 6.22).</summary>
+    internal double SlendernessRoot { get; }
     internal double RhokKgM3 { get; }
 
     /// <summary>The product type.</summary>

@@ -113,26 +113,34 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     }
 
     /// <summary>The size factor kh of EN 1995-1-1 3.2 (3.1), 3.3 (3.2) or 3.4 (3.3) for a depth in bending.</summary>
-    internal static double SizeFactor(TimberMaterial m, bool rectangular, double depthM, out string rule, bool trace, string dim = "h")
+    internal static double SizeFactor(TimberMaterial m, bool rectangular, double depthM)
     {
-        rule = "";
-        if (!rectangular) { if (trace) rule = "1 (the size factor is given for rectangular sections)"; return 1.0; }
+        if (!rectangular) return 1.0;
         switch (m.Product)
         {
             case TimberProduct.SolidSoftwood or TimberProduct.SolidHardwood:
-                if (m.RhokKgM3 > 700) { if (trace) rule = "1 (ρk > 700 kg/m³)"; return 1.0; }
-                if (depthM >= 0.150) { if (trace) rule = $"1 ({dim} ≥ 150 mm)"; return 1.0; }
-                if (trace) rule = $"min((150 / {dim})^0.2, 1.3)";
+                if (m.RhokKgM3 > 700 || depthM >= 0.150) return 1.0;
                 return Math.Min(Math.Pow(0.150 / depthM, 0.2), 1.3);
             case TimberProduct.GlulamHomogeneous or TimberProduct.GlulamCombined:
-                if (depthM >= 0.600) { if (trace) rule = $"1 ({dim} ≥ 600 mm)"; return 1.0; }
-                if (trace) rule = $"min((600 / {dim})^0.1, 1.1)";
+                if (depthM >= 0.600) return 1.0;
                 return Math.Min(Math.Pow(0.600 / depthM, 0.1), 1.1);
             default:
                 // LVL: 3.4(3) applies to every depth other than 300 mm, so deeper sections are reduced (kh < 1).
-                if (trace) rule = $"min((300 / {dim})^s, 1.2)";
                 return Math.Min(Math.Pow(0.300 / depthM, m.SizeEffectExponent), 1.2);
         }
+    }
+
+    /// <summary>The rule <see cref="SizeFactor"/> applied, in words for the trace (the same branches).</summary>
+    internal static string SizeFactorRule(TimberMaterial m, bool rectangular, double depthM, string dim)
+    {
+        if (!rectangular) return "1 (the size factor is given for rectangular sections)";
+        return m.Product switch
+        {
+            TimberProduct.SolidSoftwood or TimberProduct.SolidHardwood => m.RhokKgM3 > 700 ? "1 (ρk > 700 kg/m³)"
+                : depthM >= 0.150 ? $"1 ({dim} ≥ 150 mm)" : $"min((150 / {dim})^0.2, 1.3)",
+            TimberProduct.GlulamHomogeneous or TimberProduct.GlulamCombined => depthM >= 0.600 ? $"1 ({dim} ≥ 600 mm)" : $"min((600 / {dim})^0.1, 1.1)",
+            _ => $"min((300 / {dim})^s, 1.2)",
+        };
     }
 
     internal static string SizeFactorRef(TimberProduct p) => p switch
@@ -156,25 +164,81 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.LefYM = member.EffectiveLengthYM;
         i.LefZM = member.EffectiveLengthZM;
         i.LefLtbM = member.EffectiveLengthTorsionalM;
+        i.LambdaY = member.SlendernessY;
+        i.LambdaZ = member.SlendernessZ;
+        i.LambdaRelY = member.RelativeSlendernessY;   // λ/π √(fc,0,k / E0,05), resolved with the member
+        i.LambdaRelZ = member.RelativeSlendernessZ;
         i.Fc0kPa = member.StrengthPa;
         i.FmkPa = mat.FmkPa;
         i.E005Pa = member.ElasticModulusPa;
-        i.G005Pa = mat.GMeanPa * member.ElasticModulusPa / mat.E0MeanPa;
+        i.GMeanPa = mat.GMeanPa;
+        i.E0MeanPa = mat.E0MeanPa;
         i.BetaC = En1995Factors.BetaCUnchecked(mat.Product);
         i.Km = i.Rectangular ? 0.7 : 1.0;
         i.UseSoftwoodLtbFormula = mat.Product == TimberProduct.SolidSoftwood;
     }
 
     /// <inheritdoc/>
-    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
+        actions.HasEccentricity || actions.HasEndMoments ? EvaluateWithBending(member, actions, trace) : EvaluateCompression(member, actions, trace);
+
+    // Pure compression (6.2 in the stocky range, 6.23/6.24 without moments), straight on the member's resolved values: the
+    // path of parametric sweeps, so it marshals nothing through the kernel records. The traced and untraced checks both
+    // take it (tracing never changes the path), and a test holds it bit for bit to Ec5Kernel.Run on the same member.
+    private CheckResult EvaluateCompression(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        var mat = (TimberMaterial)member.Member.Material;
+        double kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
+        double gammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
+        double betaC = En1995Factors.BetaCUnchecked(mat.Product);
+        double lrY = member.RelativeSlendernessY, lrZ = member.RelativeSlendernessZ;   // (6.21), (6.22)
+        double kY = Ec5Kernel.K(lrY, betaC), kZ = Ec5Kernel.K(lrZ, betaC);            // (6.27), (6.28)
+        double kcY = Ec5Kernel.KcFromK(lrY, kY), kcZ = Ec5Kernel.KcFromK(lrZ, kZ);     // (6.25), (6.26)
+        double fc0d = kmod * member.StrengthPa / gammaM;                              // (2.14)
+        double sigma = actions.AxialForceN / member.AreaM2;
+        double uY = sigma / (kcY * fc0d), uZ = sigma / (kcZ * fc0d);
+        bool aboutY = uY >= uZ;
+        double u = Math.Max(uY, uZ);
+        double resistance = Math.Min(kcY, kcZ) * fc0d * member.AreaM2;
+        if (trace is not null)
+            TraceCompression(trace, member, actions, mat, kmod, gammaM, lrY, lrZ, kY, kZ, kcY, kcZ, fc0d, sigma, uY, uZ, aboutY, u, resistance);
+        double kcGov = aboutY ? kcY : kcZ;
+        return new CheckResult(member, actions, this, resistance, u, aboutY ? BucklingAxis.Y : BucklingAxis.Z,
+            kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling, Ec5Kernel.CompressionCheckName(aboutY, aboutY ? lrY : lrZ),
+            new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lrY, member.CriticalForceYN, kcY, kcY * fc0d * member.AreaM2),
+            new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lrZ, member.CriticalForceZN, kcZ, kcZ * fc0d * member.AreaM2),
+            default, trace);
+    }
+
+    // The kernel records of the compression path, rebuilt from the values it computed, for the shared trace writer.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void TraceCompression(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat,
+        double kmod, double gammaM, double lrY, double lrZ, double kY, double kZ, double kcY, double kcZ, double fc0d, double sigma,
+        double uY, double uZ, bool aboutY, double u, double resistance)
+    {
+        var i = default(Ec5Input);
+        Geometry(member, mat, ref i);
+        i.Kmod = kmod;
+        i.GammaM = gammaM;
+        i.NEdN = actions.AxialForceN;
+        i.KhY = i.KhZ = 1.0;
+        i.CheckLtb = ChecksLateralTorsionalBuckling;
+        var o = default(Ec5Output);
+        o.LambdaY = member.SlendernessY; o.LambdaZ = member.SlendernessZ;
+        o.LambdaRelY = lrY; o.LambdaRelZ = lrZ; o.KY = kY; o.KZ = kZ; o.KcY = kcY; o.KcZ = kcZ;
+        o.Fc0dPa = fc0d; o.SigmaCPa = sigma; o.Stocky = lrY <= 0.3 && lrZ <= 0.3;
+        o.UY = uY; o.UZ = uZ; o.Governs = aboutY ? Governing.AboutY : Governing.AboutZ; o.Utilisation = u; o.ResistanceN = resistance;
+        WriteTrace(trace, member, actions, mat, i, o);
+    }
+
+    // Compression with bending: the shared kernel (6.19/6.20 or 6.23/6.24, and 6.35), also used by the fire method.
+    private CheckResult EvaluateWithBending(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         var mat = (TimberMaterial)member.Member.Material;
         var i = default(Ec5Input);
         Geometry(member, mat, ref i);
-        bool tr = trace is not null;
         i.Kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
         i.GammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
-        string ruleY = "", ruleZ = "";
         i.NEdN = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions);
         i.MzEdNm = TimberRules.MomentZ(actions);
@@ -182,8 +246,8 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         if (i.MyEdNm != 0 || i.MzEdNm != 0)   // kh only matters with bending (and costs two powers)
         {
             // Without the size factor, increases are skipped but a reduction (LVL deeper than 300 mm) still applies.
-            i.KhY = SizeFactor(mat, i.Rectangular, i.HM, out ruleY, tr);
-            i.KhZ = SizeFactor(mat, i.Rectangular, i.BM, out ruleZ, tr, "b");
+            i.KhY = SizeFactor(mat, i.Rectangular, i.HM);
+            i.KhZ = SizeFactor(mat, i.Rectangular, i.BM);
             if (!ApplySizeFactor)
             {
                 i.KhY = Math.Min(i.KhY, 1.0);
@@ -195,10 +259,9 @@ public sealed class Ec5ColumnStability : IResistanceMethod
 
         // The steps are written by a separate method so that the untraced path keeps a small frame (no string temporaries
         // to zero on entry); it receives the very values the kernel computed.
-        if (trace is not null) WriteTrace(trace, member, actions, mat, i, o, ruleY, ruleZ);
+        if (trace is not null) WriteTrace(trace, member, actions, mat, i, o);
 
-        double ncrY = Math.PI * Math.PI * i.E005Pa * i.IyM4 / (i.LefYM * i.LefYM);
-        double ncrZ = Math.PI * Math.PI * i.E005Pa * i.IzM4 / (i.LefZM * i.LefZM);
+        double ncrY = member.CriticalForceYN, ncrZ = member.CriticalForceZN;   // π² E0,05 I / Lef², resolved with the member
         return new CheckResult(member, actions, this, o.ResistanceN, o.Utilisation, Ec5Kernel.Axis(o), Ec5Kernel.Mode(o), Ec5Kernel.CheckName(o),
             new AxisOutcome(i.LefYM, o.LambdaY, o.LambdaRelY, ncrY, o.KcY, o.KcY * o.Fc0dPa * i.AreaM2),
             new AxisOutcome(i.LefZM, o.LambdaZ, o.LambdaRelZ, ncrZ, o.KcZ, o.KcZ * o.Fc0dPa * i.AreaM2),
@@ -208,8 +271,9 @@ public sealed class Ec5ColumnStability : IResistanceMethod
 
     [MethodImpl(MethodImplOptions.NoInlining)]
     private void WriteTrace(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat,
-        in Ec5Input i, in Ec5Output o, string ruleY, string ruleZ)
+        in Ec5Input i, in Ec5Output o)
     {
+        string ruleY = SizeFactorRule(mat, i.Rectangular, i.HM, "h"), ruleZ = SizeFactorRule(mat, i.Rectangular, i.BM, "b");
         string src = mat.Source;
         trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; values from {src}.", src);
         trace.Add("fc,0,k", "characteristic compression strength parallel to grain", TimberRules.Input, i.Fc0kPa, StepUnit.Stress, src);

@@ -158,8 +158,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         i.Kmod = Kfi(mat);      // kmod,fi (= 1.0) × kfi: fd,fi = kmod,fi kfi fk / γM,fi (2.1)
         i.GammaM = FireMaterialFactor;
         // kh is not used to raise strengths in fire; a reduction (LVL deeper than 300 mm) is kept, on the residual depth.
-        i.KhY = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(hFi, 1e-9), out _, false), 1.0);
-        i.KhZ = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(bFi, 1e-9), out _, false), 1.0);
+        i.KhY = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(hFi, 1e-9)), 1.0);
+        i.KhZ = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(bFi, 1e-9)), 1.0);
         i.NEdN = actions.AxialForceN;
         double n = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions) + (IncludesCentroidShift ? n * shiftZ : 0);
@@ -173,6 +173,10 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         i.WyM3 = bFi * hFi * hFi / 6;
         i.WzM3 = hFi * bFi * bFi / 6;
         i.TorsionM4 = RectangleSection.TorsionConstantOf(bFi, hFi);
+        i.LambdaY = i.LefYM / Math.Sqrt(i.IyM4 / i.AreaM2);   // the residual section's radius of gyration
+        i.LambdaZ = i.LefZM / Math.Sqrt(i.IzM4 / i.AreaM2);
+        i.LambdaRelY = i.LambdaY / Math.PI * mat.SlendernessRoot;   // (6.21) on the residual section
+        i.LambdaRelZ = i.LambdaZ / Math.PI * mat.SlendernessRoot;
         return true;
     }
 

@@ -10,7 +10,9 @@ internal struct Ec5Input
     internal double BM, HM;                 // width b (along y) and depth h (along z); both = d for a circle
     internal double AreaM2, IyM4, IzM4, WyM3, WzM3, TorsionM4;
     internal double LefYM, LefZM, LefLtbM;
-    internal double Fc0kPa, FmkPa, E005Pa, G005Pa;
+    internal double LambdaY, LambdaZ;       // Lef / i, resolved with the member (or with the residual section in fire)
+    internal double LambdaRelY, LambdaRelZ; // λ/π √(fc,0,k / E0,05) (6.21, 6.22), resolved with the member (or in fire)
+    internal double Fc0kPa, FmkPa, E005Pa, GMeanPa, E0MeanPa;
     internal double Kmod, GammaM, KhY, KhZ, BetaC, Km;
     internal double NEdN, MyEdNm, MzEdNm;   // design compression and first-order design moments at the governing section
     internal bool CheckLtb, UseSoftwoodLtbFormula;
@@ -19,12 +21,12 @@ internal struct Ec5Input
 /// <summary>What the kernel found.</summary>
 internal struct Ec5Output
 {
-    internal double IyRadM, IzRadM, LambdaY, LambdaZ, LambdaRelY, LambdaRelZ, KY, KZ, KcY, KcZ;
+    internal double LambdaY, LambdaZ, LambdaRelY, LambdaRelZ, KY, KZ, KcY, KcZ;
     internal double Fc0dPa, FmydPa, FmzdPa, SigmaCPa, SigmaMyPa, SigmaMzPa;
     internal bool Bending, Stocky;          // Stocky: λrel,y ≤ 0.3 and λrel,z ≤ 0.3 (6.19/6.20)
     internal double UY, UZ;                 // (6.23)/(6.24) or (6.19)/(6.20), or the axial check alone without bending
     internal bool LtbChecked;
-    internal double SigmaMCritPa, LambdaRelM, KCrit, ULtb;
+    internal double G005Pa, SigmaMCritPa, LambdaRelM, KCrit, ULtb;
     internal double Utilisation, ResistanceN;
     internal Governing Governs;
 }
@@ -57,38 +59,49 @@ internal static class Ec5Kernel
     internal static double KCrit(double lambdaRelM) =>
         lambdaRelM <= 0.75 ? 1.0 : lambdaRelM <= 1.4 ? 1.56 - 0.75 * lambdaRelM : 1 / (lambdaRelM * lambdaRelM);
 
+    /// <summary>kc from λrel and the k already computed for it (6.25, 6.26): the same operations as <see cref="Kc"/>.</summary>
+    internal static double KcFromK(double lambdaRel, double k) =>
+        lambdaRel <= 0.3 ? 1.0 : 1 / (k + Math.Sqrt(k * k - lambdaRel * lambdaRel));
+
     internal static void Run(in Ec5Input i, out Ec5Output o)
     {
         o = default;
-        o.IyRadM = Math.Sqrt(i.IyM4 / i.AreaM2);
-        o.IzRadM = Math.Sqrt(i.IzM4 / i.AreaM2);
-        o.LambdaY = i.LefYM / o.IyRadM;
-        o.LambdaZ = i.LefZM / o.IzRadM;
-        double root = Math.Sqrt(i.Fc0kPa / i.E005Pa);                 // common to both axes (6.21, 6.22)
-        o.LambdaRelY = o.LambdaY / Math.PI * root;                   // = RelativeSlenderness(λy, …), same operations
-        o.LambdaRelZ = o.LambdaZ / Math.PI * root;
+        o.LambdaY = i.LambdaY;
+        o.LambdaZ = i.LambdaZ;
+        o.LambdaRelY = i.LambdaRelY;                                 // (6.21)
+        o.LambdaRelZ = i.LambdaRelZ;                                 // (6.22)
         o.KY = K(o.LambdaRelY, i.BetaC);
         o.KZ = K(o.LambdaRelZ, i.BetaC);
-        o.KcY = Kc(o.LambdaRelY, i.BetaC);
-        o.KcZ = Kc(o.LambdaRelZ, i.BetaC);
+        o.KcY = KcFromK(o.LambdaRelY, o.KY);
+        o.KcZ = KcFromK(o.LambdaRelZ, o.KZ);
 
         o.Fc0dPa = i.Kmod * i.Fc0kPa / i.GammaM;                       // 2.4.1 (2.14)
-        o.FmydPa = i.Kmod * i.KhY * i.FmkPa / i.GammaM;
-        o.FmzdPa = i.Kmod * i.KhZ * i.FmkPa / i.GammaM;
         o.SigmaCPa = i.NEdN / i.AreaM2;
-        o.SigmaMyPa = Math.Abs(i.MyEdNm) / i.WyM3;
-        o.SigmaMzPa = Math.Abs(i.MzEdNm) / i.WzM3;
-        o.Bending = o.SigmaMyPa > 0 || o.SigmaMzPa > 0;
+        o.Bending = i.MyEdNm != 0 || i.MzEdNm != 0;
         o.Stocky = o.LambdaRelY <= 0.3 && o.LambdaRelZ <= 0.3;
 
-        double my = o.SigmaMyPa / o.FmydPa, mz = o.SigmaMzPa / o.FmzdPa;
         if (!o.Bending)
         {
             // Pure compression: σc,0,d ≤ kc fc,0,d, linear in the load ((6.2) with kc = 1 in the stocky range).
             o.UY = o.SigmaCPa / (o.KcY * o.Fc0dPa);
             o.UZ = o.SigmaCPa / (o.KcZ * o.Fc0dPa);
+            o.Governs = o.UY >= o.UZ ? Governing.AboutY : Governing.AboutZ;
+            o.Utilisation = Math.Max(o.UY, o.UZ);
         }
-        else if (o.Stocky)
+        else Bending(i, ref o);
+        o.ResistanceN = Math.Min(o.KcY, o.KcZ) * o.Fc0dPa * i.AreaM2;
+    }
+
+    // Compression with bending (6.19/6.20 or 6.23/6.24) and lateral torsional stability (6.35); kept apart so that the
+    // pure compression path stays short.
+    private static void Bending(in Ec5Input i, ref Ec5Output o)
+    {
+        o.FmydPa = i.Kmod * i.KhY * i.FmkPa / i.GammaM;
+        o.FmzdPa = i.Kmod * i.KhZ * i.FmkPa / i.GammaM;
+        o.SigmaMyPa = Math.Abs(i.MyEdNm) / i.WyM3;
+        o.SigmaMzPa = Math.Abs(i.MzEdNm) / i.WzM3;
+        double my = o.SigmaMyPa / o.FmydPa, mz = o.SigmaMzPa / o.FmzdPa;
+        if (o.Stocky)
         {
             double c = o.SigmaCPa / o.Fc0dPa;
             o.UY = c * c + my + i.Km * mz;                           // (6.19)
@@ -103,9 +116,10 @@ internal static class Ec5Kernel
         o.LtbChecked = i.CheckLtb && i.Rectangular && o.SigmaMyPa > 0;
         if (o.LtbChecked)
         {
+            o.G005Pa = i.GMeanPa * i.E005Pa / i.E0MeanPa;               // G0,05 = Gmean E0,05 / E0,mean (common practice)
             o.SigmaMCritPa = i.UseSoftwoodLtbFormula
                 ? 0.78 * i.BM * i.BM * i.E005Pa / (i.HM * i.LefLtbM)                                   // (6.32)
-                : Math.PI * Math.Sqrt(i.E005Pa * i.IzM4 * i.G005Pa * i.TorsionM4) / (i.LefLtbM * i.WyM3); // (6.31)
+                : Math.PI * Math.Sqrt(i.E005Pa * i.IzM4 * o.G005Pa * i.TorsionM4) / (i.LefLtbM * i.WyM3); // (6.31)
             o.LambdaRelM = Math.Sqrt(i.FmkPa / o.SigmaMCritPa);       // (6.30)
             o.KCrit = KCrit(o.LambdaRelM);                           // (6.34)
             double m = o.SigmaMyPa / (o.KCrit * o.FmydPa);
@@ -119,14 +133,18 @@ internal static class Ec5Kernel
             o.Utilisation = o.ULtb;
             o.Governs = Governing.Ltb;
         }
-        o.ResistanceN = Math.Min(o.KcY, o.KcZ) * o.Fc0dPa * i.AreaM2;
     }
+
+    /// <summary>The governing check of pure compression, about y or z.</summary>
+    internal static string CompressionCheckName(bool aboutY, double lambdaRel) => aboutY
+        ? lambdaRel <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2): compression, λrel,y ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.23): column buckling about y"
+        : lambdaRel <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2): compression, λrel,z ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.24): column buckling about z";
 
     internal static string CheckName(in Ec5Output o) => o.Governs switch
     {
         Governing.Ltb => "EN 1995-1-1 6.3.3 (6.35): compression with lateral torsional buckling",
-        Governing.AboutY when !o.Bending => o.LambdaRelY <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2): compression, λrel,y ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.23): column buckling about y",
-        Governing.AboutZ when !o.Bending => o.LambdaRelZ <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2): compression, λrel,z ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.24): column buckling about z",
+        Governing.AboutY when !o.Bending => CompressionCheckName(true, o.LambdaRelY),
+        Governing.AboutZ when !o.Bending => CompressionCheckName(false, o.LambdaRelZ),
         Governing.AboutY => o.Stocky ? "EN 1995-1-1 6.2.4 (6.19): compression and bending, λrel ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.23): compression and bending, buckling about y",
         _ => o.Stocky ? "EN 1995-1-1 6.2.4 (6.20): compression and bending, λrel ≤ 0.3" : "EN 1995-1-1 6.3.2 (6.24): compression and bending, buckling about z",
     };

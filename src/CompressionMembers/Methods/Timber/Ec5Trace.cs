@@ -65,7 +65,7 @@ internal static class Ec5Trace
                 t.Add("σm,crit", "critical bending stress", "0.78 b² E0,05 / (h Lef,LT)", o.SigmaMCritPa, StepUnit.Stress, "EN 1995-1-1 6.3.3 (6.32)");
             else
             {
-                t.Add("G0,05", "fifth-percentile shear modulus", "Gmean × E0,05 / E0,mean (common practice)", i.G005Pa, StepUnit.Stress, "EN 1995-1-1 6.3.3(2)");
+                t.Add("G0,05", "fifth-percentile shear modulus", "Gmean × E0,05 / E0,mean (common practice)", o.G005Pa, StepUnit.Stress, "EN 1995-1-1 6.3.3(2)");
                 t.Add("Itor", "torsion constant", "rectangle (Roark)", i.TorsionM4, StepUnit.SecondMoment, "section");
                 t.Add("σm,crit", "critical bending stress", "π √(E0,05 Iz G0,05 Itor) / (Lef,LT Wy)", o.SigmaMCritPa, StepUnit.Stress, "EN 1995-1-1 6.3.3 (6.31)");
             }

@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Actions;
 using CompressionMembers.Materials.Timber;
 
@@ -39,6 +40,7 @@ public static class En1995Factors
         return KmodUnchecked(serviceClass, duration);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double KmodUnchecked(ServiceClass sc, LoadDurationClass d)
     {
         // EN 1995-1-1 Table 3.1, rows "Solid timber EN 14081-1", "Glued laminated timber EN 14080", "LVL EN 14374, EN 14279".

@@ -1,0 +1,97 @@
+using System;
+using CompressionMembers.Actions;
+using CompressionMembers.Materials.Timber;
+using CompressionMembers.Members;
+using CompressionMembers.Methods;
+using CompressionMembers.Methods.Timber;
+using CompressionMembers.Resolution;
+using CompressionMembers.Restraints;
+using CompressionMembers.Results;
+using CompressionMembers.Sections;
+using CsCheck;
+using UnitsNet;
+
+namespace CompressionMembers.Tests.Performance;
+
+/// <summary>
+/// The straight-line pure-compression path of the EN 1995-1-1 column method (the path of parametric sweeps) against the
+/// general kernel <see cref="Ec5Kernel.Run"/> that handles bending and fire: for the same member and load they must agree to
+/// the last bit — both implement EN 1995-1-1 (6.21)–(6.28) and (2.14) with the same operations in the same order. Inputs
+/// are random (CsCheck); the expected values are the kernel's own, so this is a consistency check, not a reference check
+/// (the reference checks are in Timber/ and Published/).
+/// </summary>
+public class FastPathEquivalenceTests
+{
+    private static readonly TimberMaterial[] Classes = [TimberGrades.C16, TimberGrades.C24, TimberGrades.C30, TimberGrades.GL24h, TimberGrades.GL32h];
+    private static readonly LoadDurationClass[] Durations =
+        [LoadDurationClass.Permanent, LoadDurationClass.LongTerm, LoadDurationClass.MediumTerm, LoadDurationClass.ShortTerm, LoadDurationClass.Instantaneous];
+
+    [Fact]
+    public void Ec5Compression_RandomMembers_BitIdenticalToGeneralKernel()
+    {
+        Gen.Select(Gen.Double[20, 400], Gen.Double[20, 600], Gen.Double[100, 12000], Gen.Int[0, Classes.Length - 1], Gen.Int[0, Durations.Length - 1],
+                Gen.Double[0.5, 2.0], Gen.Bool)
+            .Sample((b, h, l, ci, di, k, circle) =>
+            {
+                var mat = Classes[ci];
+                Section s = circle ? new CircleSection(Length.FromMillimeters(b)) : new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h));
+                var member = Member.Create(s, mat, Length.FromMillimeters(l),
+                    new Restraint(AxisRestraint.FromBucklingFactor(k), AxisRestraint.FromBucklingFactor(1), AxisRestraint.FromBucklingFactor(1)));
+                var actions = DesignActions.Compression(Force.FromKilonewtons(50)).WithLoadDuration(Durations[di]);
+                var method = new Ec5ColumnStability(ServiceClass.Class2);
+                var r = Check.Evaluate(member, actions, method);
+
+                // The general kernel on the same member and actions.
+                ref readonly var rm = ref member.Resolved;
+                var i = default(Ec5Input);
+                Ec5ColumnStability.Geometry(rm, mat, ref i);
+                i.Kmod = En1995Factors.KmodUnchecked(ServiceClass.Class2, Durations[di]);
+                i.GammaM = En1995Factors.GammaMUnchecked(mat.Product);
+                i.NEdN = actions.Resolved.AxialForceN;
+                i.KhY = i.KhZ = 1.0;
+                Ec5Kernel.Run(i, out var o);
+
+                return r.Utilisation.Equals(o.Utilisation) && r.DesignResistanceN.Equals(o.ResistanceN)
+                    && r.AboutY.ReductionFactor.Equals(o.KcY) && r.AboutZ.ReductionFactor.Equals(o.KcZ)
+                    && r.AboutY.RelativeSlenderness.Equals(o.LambdaRelY) && r.AboutZ.RelativeSlenderness.Equals(o.LambdaRelZ)
+                    && r.AboutY.ResistanceN.Equals(o.KcY * o.Fc0dPa * i.AreaM2) && r.GoverningAxis == Ec5Kernel.Axis(o)
+                    && r.GoverningMode == Ec5Kernel.Mode(o) && r.GoverningCheck == Ec5Kernel.CheckName(o);
+            }, seed: Trust.PropertyTests.Seed, threads: 1);
+    }
+
+    private sealed class BrokenMethod(double resistanceN, double utilisation) : IResistanceMethod
+    {
+        public MethodIdentity Identity { get; } = new("broken on purpose (test)", "none", "", "");
+        public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) => Applicability.Applicable;
+        public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
+            new(member, actions, this, resistanceN, utilisation, BucklingAxis.Y, FailureMode.FlexuralBuckling, "none", default, default, default, trace);
+    }
+
+    [Theory]
+    [InlineData(double.NaN, 0.5)]
+    [InlineData(-1.0, 0.5)]
+    [InlineData(double.PositiveInfinity, 0.5)]
+    [InlineData(1000.0, double.NaN)]
+    [InlineData(1000.0, -0.1)]
+    public void Evaluate_MethodBuildsAnImpossibleResult_ThrowsInvalidOperation(double resistanceN, double utilisation)
+    {
+        // Contract of IResistanceMethod (common practice for plug-ins): a result with a resistance that is not a finite,
+        // non-negative number, or a NaN or negative utilisation, is refused where it is built, and so never reaches a report.
+        var member = Member.Create(new RectangleSection(Length.FromMillimeters(50), Length.FromMillimeters(50)), TimberGrades.C24,
+            Length.FromMeters(1), Restraint.PinnedBothAxes, "test post");
+        var ex = Assert.Throws<InvalidOperationException>(() =>
+            Check.Evaluate(member, DesignActions.Compression(Force.FromKilonewtons(1)), new BrokenMethod(resistanceN, utilisation)));
+        Assert.Contains("broken on purpose (test) returned resistance", ex.Message);
+        Assert.Contains("\"test post\"", ex.Message);
+    }
+
+    [Fact]
+    public void Evaluate_InfiniteUtilisation_IsAFailingResultNotAnError()
+    {
+        // A section burnt away in fire has no resistance: utilisation +∞, which fails (EN 1995-1-2 4.2.2; common practice).
+        var member = Member.Create(new RectangleSection(Length.FromMillimeters(50), Length.FromMillimeters(50)), TimberGrades.C24,
+            Length.FromMeters(1), Restraint.PinnedBothAxes);
+        var r = Check.Evaluate(member, DesignActions.Compression(Force.FromKilonewtons(1)), new BrokenMethod(0, double.PositiveInfinity));
+        Assert.False(r.Passed);
+    }
+}
