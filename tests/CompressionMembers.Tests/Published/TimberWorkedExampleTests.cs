@@ -71,6 +71,10 @@ public class TimberWorkedExampleTests
         // "fm,0,edge,d = kmod/γM · kh · fm,0,edge,k = 0,8/1,2 · 1,15 · 27 N/mm² = 20,7 N/mm²" with kh = (300/h)^s = 1,15.
         Near.Absolute(1.15, Step(r, "kh,y"), 0.005, src);
         Near.Absolute(20.7e6, Step(r, "fm,y,d"), 0.05e6, src);
+        // "The following expressions shall be satisfied with km = 0,7 for rectangular cross-sections" (p. 198); also
+        // Porteous & Kermani, "Redistribution factor for a rectangular section km = 0.7" (page info-bjp-1).
+        Near.Absolute(0.7, Step(r, "km"), 1e-12, src);
+        Near.Absolute(0.7, Step(r, "km"), 1e-12, PublishedSources.PorteousKermani);
     }
 
     [Fact]
