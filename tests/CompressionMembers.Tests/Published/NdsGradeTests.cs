@@ -1,7 +1,13 @@
+using System.Linq;
 using CompressionMembers.Actions;
 using CompressionMembers.Materials.Timber;
+using CompressionMembers.Members;
+using CompressionMembers.Methods;
 using CompressionMembers.Methods.Timber;
+using CompressionMembers.Restraints;
+using CompressionMembers.Sections;
 using CompressionMembers.Tests.Support;
+using UnitsNet;
 
 namespace CompressionMembers.Tests.Published;
 
@@ -56,5 +62,23 @@ public class NdsGradeTests
         const string src = "NDS 2018 3.7.1 as summarised at https://www.callout.app/codes/nds-2018-4-4-1";
         Near.Absolute(0.8, NdsGrades.SprucePineFirNo2.ColumnConstant, 1e-12, src);
         Near.Absolute(0.9, NdsGrades.Glulam24F18E.ColumnConstant, 1e-12, src);
+    }
+
+    [Fact]
+    public void ColumnStability_SlendernessLimitAndEminWithoutCd_MatchNds2018Summary()
+    {
+        // "The maximum slenderness ratio is 50 for solid columns … FcE = 0.822 × Emin' / (Le/d)^2, where Emin' is the adjusted
+        // minimum modulus of elasticity (adjusted for moisture, temperature, and incising, but NOT for load duration)":
+        // NDS 2018 3.7.1 as summarised at https://www.callout.app/codes/nds-2018-4-4-1.
+        const string src = "NDS 2018 3.7.1 as summarised at https://www.callout.app/codes/nds-2018-4-4-1";
+        Assert.Equal(50, ResistanceMethods.NdsColumnAsd.SlendernessLimit);
+        // A 2×4 (1.5 × 3.5 in.) of the SPF preset, 5 ft long: FcE must not change with CD.
+        var member = Member.Create(new RectangleSection(Length.FromInches(1.5), Length.FromInches(3.5)), NdsGrades.SprucePineFirNo2,
+            Length.FromFeet(5), Restraint.PinnedBothAxes, "2x4 post");
+        double FcE(double cd) => Check.EvaluateWithTrace(member, DesignActions.Compression(Force.FromKilopoundsForce(1)),
+            new NdsColumnStability(NdsDesignFormat.Asd, loadDurationFactor: cd)).Steps.First(x => x.Symbol == "FcE").Value;
+        double le = 60 / 1.5;
+        Near.Relative(0.822 * NdsGrades.SprucePineFirNo2.StabilityModulus.Pascals / (le * le), FcE(1.0), 1e-12, src + " (0.822 E'min/(le/d)²)");
+        Assert.Equal(FcE(1.0), FcE(1.6));
     }
 }
