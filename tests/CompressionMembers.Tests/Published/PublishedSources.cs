@@ -37,10 +37,6 @@ internal static class PublishedSources
         "2nd edition (Wiley, 2002), column buckling, stored copies at https://tr.scribd.com/document/390433748/Aluminum-Manual-78-txt " +
         "and https://tr.scribd.com/document/390433853/Aluminum-Manual-79-txt";
 
-    /// <summary>Gere, Mechanics of Materials, 7th edition, chapter 11 worked solutions.</summary>
-    internal const string Gere = "J. M. Gere, B. J. Goodno, Mechanics of Materials, 7th edition (Cengage), chapter 11 'Columns', " +
-        "worked solutions of the textbook's problems (instructor's solution manual), stored copies at https://www.coursehero.com/file/";
-
     /// <summary>Hibbeler, Mechanics of Materials, chapter 13 worked examples.</summary>
     internal const string Hibbeler = "R. C. Hibbeler, Mechanics of Materials, chapter 13 'Buckling of Columns', Examples 13.1 and 13.2 " +
         "(SI units; edition not stated in the stored copy), stored copy at https://scribd.com/document/505697168/Ch13";

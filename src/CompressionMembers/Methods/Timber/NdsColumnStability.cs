@@ -21,15 +21,12 @@ namespace CompressionMembers.Methods.Timber;
 /// <remarks>
 /// <para>Cp = (1 + FcE/Fc*)/(2c) − √[((1 + FcE/Fc*)/(2c))² − (FcE/Fc*)/c] (3.7-1), c = 0.8 sawn lumber, 0.85 round timber
 /// poles and piles, 0.9 glulam and structural composite lumber. Fc* is Fc times every factor but Cp. A round column is
-/// designed as the square of equal area (3.7.3), d = D √π / 2. The equation with c = 0.8 reproduces the worked wood-column
-/// solutions of Gere &amp; Goodno, Mechanics of Materials, 7th ed., §11.9 (Cp to four decimals; test in Published/); c = 0.9
-/// for glulam agrees with a published summary of NDS 2018 3.7.1; c = 0.85 for poles is still from memory.</para>
+/// designed as the square of equal area (3.7.3), d = D √π / 2. The constants c are from memory (common practice).</para>
 /// <para>ASD load duration from the action's load-duration class unless given (common practice, NDS Table 2.3.2 / B1):
 /// permanent 0.9, long-term 1.0 (ten years), medium-term 1.15 (two months, snow), short-term 1.25 (seven days,
 /// construction), instantaneous 1.6 (ten minutes, wind and earthquake). LRFD time effect λ (NDS Table N3): permanent 0.6,
 /// long-term 0.7, medium-term 0.8, short-term 0.8, instantaneous 1.0. KF = 2.40 (Fc), 2.54 (Fb), 1.76 (Emin); φ = 0.90
-/// (compression), 0.85 (bending, stability). Recalled from memory of NDS 2018 except the five CD values, which agree with a
-/// published summary of NDS 2018 Table 2.3.2 (test in Published/); verify against your edition.</para>
+/// (compression), 0.85 (bending, stability). All recalled from memory of NDS 2018; verify against your edition.</para>
 /// <para>The actions carry only end effects (eccentricity, end moments), so the bending stress is the eccentric term of
 /// (15.4-1): fc (6e/d) = (|P e| + max |M,end|) / S, amplified by [1 + 0.234 fc/FcE] in the numerator and by the
 /// 3.9-3 denominators [1 − fc/FcE1] and [1 − fc/FcE2 − (fbe1/FbE)²]; end moments are taken as equivalent end
