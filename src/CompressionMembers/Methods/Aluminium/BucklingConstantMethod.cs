@@ -16,7 +16,10 @@ namespace CompressionMembers.Methods.Aluminium;
 /// <para>Buckling constants (Aluminum Association, Specification for Aluminum Structures, buckling constants for
 /// compression in columns; all from memory): artificially aged tempers Bc = Fcy [1 + (Fcy / 2250 ksi)^½],
 /// Dc = (Bc / 10)(Bc / E)^½, Cc = 0.41 Bc / Dc; other tempers Bc = Fcy [1 + (Fcy / 1000 ksi)^½],
-/// Dc = (Bc / 20)(6 Bc / E)^½, Cc = 2 Bc / (3 Dc). φc = 0.90 and Ωc = 1.65 (from memory; overridable).</para>
+/// Dc = (Bc / 20)(6 Bc / E)^½, Cc = 2 Bc / (3 Dc). φc = 0.90 and Ωc = 1.65 (from memory; overridable). Checked against
+/// published copies (tests in Published/): the split into tempers T5–T9 and the others (Kissell &amp; Ferry, Aluminum
+/// Structures, 2nd ed., §5). The formulas themselves, the constants for the other tempers and φc, Ωc were not found in a
+/// stored copy of the specification: from memory.</para>
 /// <para>Fcy is taken as the alloy's f0 (the EN 0.2 % proof strength); the US specification tabulates its own
 /// compressive yield strengths. Local buckling of the parts is not checked here. Thread safety: immutable.</para>
 /// </remarks>

@@ -8,11 +8,19 @@ namespace CompressionMembers.Methods.Timber;
 /// <summary>
 /// The tabled factors of EN 1995-1-1:2004+A2:2014 and EN 1995-1-2:2004 that the timber methods use: kmod (Table 3.1),
 /// kdef (Table 3.2), γM (Table 2.3, recommended values), βc (6.29), kfi (EN 1995-1-2 Table 2.1) and the charring rates
-/// β0 and βn (EN 1995-1-2 Table 3.1). Values recalled from memory of the standards; verify against your copy and
-/// your national annex.
+/// β0 and βn (EN 1995-1-2 Table 3.1). Verify against your copy and your national annex.
 /// </summary>
-/// <remarks>Only the rows for solid timber, glued laminated timber and LVL are held (the products of <see cref="TimberProduct"/>).
-/// Thread safety: stateless.</remarks>
+/// <remarks>
+/// <para>Checked against published copies (tests in Published/, list in docs/methods-timber.md): kmod (the LVL Handbook
+/// Europe 2025, Table 4.2, which states that the same values hold for structural timber and glulam); kdef for LVL (the same
+/// handbook, Table 4.3); βc (0.2 solid timber in Porteous &amp; Kermani's worked examples, 0.1 LVL in the handbook's column
+/// example); kfi = 1.1 for LVL and γM,fi = 1.0 (the handbook, section 6.4); the charring rates (Buchanan, Structural Design
+/// for Fire Safety, 2nd ed., Table 9.1, "Charring rates from Eurocode 5"). Still recalled from memory: kdef for solid
+/// timber and glulam, the recommended γM of Table 2.3 (the UK national annex values quoted by Porteous &amp; Kermani, 1.3
+/// solid and 1.2 LVL, are the same numbers), kfi for solid timber and glulam.</para>
+/// <para>Only the rows for solid timber, glued laminated timber and LVL are held (the products of <see cref="TimberProduct"/>).
+/// Thread safety: stateless.</para>
+/// </remarks>
 public static class En1995Factors
 {
     internal const string KmodRef = "EN 1995-1-1 3.1.3, Table 3.1";

@@ -21,7 +21,7 @@ namespace CompressionMembers.Methods.Timber;
 /// <remarks>
 /// <para>Cp = (1 + FcE/Fc*)/(2c) − √[((1 + FcE/Fc*)/(2c))² − (FcE/Fc*)/c] (3.7-1), c = 0.8 sawn lumber, 0.85 round timber
 /// poles and piles, 0.9 glulam and structural composite lumber. Fc* is Fc times every factor but Cp. A round column is
-/// designed as the square of equal area (3.7.3), d = D √π / 2.</para>
+/// designed as the square of equal area (3.7.3), d = D √π / 2. The constants c are from memory (common practice).</para>
 /// <para>ASD load duration from the action's load-duration class unless given (common practice, NDS Table 2.3.2 / B1):
 /// permanent 0.9, long-term 1.0 (ten years), medium-term 1.15 (two months, snow), short-term 1.25 (seven days,
 /// construction), instantaneous 1.6 (ten minutes, wind and earthquake). LRFD time effect λ (NDS Table N3): permanent 0.6,
