@@ -1,4 +1,4 @@
 using BenchmarkDotNet.Running;
 
 // Run: dotnet run -c Release --project benchmarks/CompressionMembers.Benchmarks -- --filter '*' --job short
-BenchmarkSwitcher.FromAssembly(typeof(CompressionMembers.Benchmarks.ClassicalBenchmarks).Assembly).Run(args);
+BenchmarkSwitcher.FromAssembly(typeof(CompressionMembers.Benchmarks.MethodBenchmarks).Assembly).Run(args);

@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Globalization;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Actions;
 using CompressionMembers.Members;
 using CompressionMembers.Methods;
@@ -43,6 +44,7 @@ public readonly struct CheckResult
     /// <exception cref="InvalidOperationException">The resistance is negative or not finite, or the utilisation is negative
     /// or NaN: the method that builds such a result is broken. (Checked here, once, so that <see cref="Check"/> can hand the
     /// result on without copying it.)</exception>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]   // a call would copy three outcomes and pass five references through write barriers
     public CheckResult(in ResolvedMember member, in ResolvedActions actions, IResistanceMethod method,
         double designResistanceN, double utilisation, BucklingAxis governingAxis, FailureMode governingMode, string governingCheck,
         AxisOutcome aboutY, AxisOutcome aboutZ, AxisOutcome torsional, CalculationTrace? trace)
@@ -63,6 +65,7 @@ public readonly struct CheckResult
             ThrowBroken(method, member.Member, designResistanceN, utilisation);
     }
 
+    [MethodImpl(MethodImplOptions.NoInlining)]
     private static void ThrowBroken(IResistanceMethod method, Member member, double resistanceN, double utilisation) =>
         throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture,
             $"{method?.Identity.Name ?? "A method"} returned resistance {resistanceN} N and utilisation {utilisation} for \"{member?.Name}\": a method must return a finite, non-negative resistance and a utilisation that is neither negative nor NaN."));

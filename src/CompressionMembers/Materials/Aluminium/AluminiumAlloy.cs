@@ -41,7 +41,17 @@ public sealed class AluminiumAlloy : Material
         HazUltimateFactorMig = ruMig;
         HazProofFactorTig = roTig;
         HazUltimateFactorTig = ruTig;
+        // US-practice buckling constants of both temper groups, computed once (they follow from f0 and E alone).
+        IsArtificiallyAged = Methods.Aluminium.BucklingConstantMethod.IsArtificiallyAged(temper);
+        Methods.Aluminium.BucklingConstantMethod.Constants(true, CompressiveStrengthPa, ElasticModulusPa, out AgedBc, out AgedDc, out AgedCc);
+        Methods.Aluminium.BucklingConstantMethod.Constants(false, CompressiveStrengthPa, ElasticModulusPa, out OtherBc, out OtherDc, out OtherCc);
     }
+
+    /// <summary>Whether the temper is artificially aged (T5 to T9), read once from <see cref="Temper"/>.</summary>
+    internal bool IsArtificiallyAged { get; }
+
+    // Bc, Dc (Pa) and Cc of the buckling-constant method for artificially aged tempers and for the others.
+    internal readonly double AgedBc, AgedDc, AgedCc, OtherBc, OtherDc, OtherCc;
 
     /// <summary>Creates an alloy of your own (or one from a newer table).</summary>
     /// <param name="name">Name for reports, such as "EN AW-6082-T6 extrusion t ≤ 5 mm".</param>
@@ -131,6 +141,9 @@ public sealed class AluminiumAlloy : Material
     /// <returns>The factor.</returns>
     /// <exception cref="System.ArgumentOutOfRangeException">The process is not MIG or TIG.</exception>
     public double HazUltimateFactor(WeldingProcess process) => CheckedProcess(process) == WeldingProcess.Tig ? HazUltimateFactorTig : HazUltimateFactorMig;
+
+    internal double HazProofFactorFor(WeldingProcess trusted) => trusted == WeldingProcess.Tig ? HazProofFactorTig : HazProofFactorMig;
+    internal double HazUltimateFactorFor(WeldingProcess trusted) => trusted == WeldingProcess.Tig ? HazUltimateFactorTig : HazUltimateFactorMig;
 
     // An explicit test, not Enum.IsDefined: this runs inside every EN 1999-1-1 check, and Enum.IsDefined reads a per-type
     // cache that the runtime may drop under memory pressure and rebuild (an allocation on the hot path).

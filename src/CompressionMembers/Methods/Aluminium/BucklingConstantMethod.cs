@@ -121,10 +121,10 @@ public sealed class BucklingConstantMethod : IResistanceMethod
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         var alloy = (AluminiumAlloy)member.Member.Material;
-        bool aged = Group == TemperGroup.ArtificiallyAged || (Group == TemperGroup.FromAlloy && IsArtificiallyAged(alloy.Temper));
+        bool aged = Group == TemperGroup.ArtificiallyAged || (Group == TemperGroup.FromAlloy && alloy.IsArtificiallyAged);
         double fcy = member.StrengthPa, e = member.ElasticModulusPa, a = member.AreaM2;
-        Constants(aged, fcy, e, out double bc, out double dc, out double cc);
-        double s1 = (bc - fcy) / dc;
+        // Bc, Dc, Cc follow from the alloy's f0 and E alone: computed once with the alloy (Constants, the same operations).
+        double bc = aged ? alloy.AgedBc : alloy.OtherBc, dc = aged ? alloy.AgedDc : alloy.OtherDc, cc = aged ? alloy.AgedCc : alloy.OtherCc;
         var y = new AxisData(member, BucklingAxis.Y);
         var z = new AxisData(member, BucklingAxis.Z);
         double fy = NominalStress(y.Slenderness, fcy, e, bc, dc, cc, out int by);
@@ -144,7 +144,7 @@ public sealed class BucklingConstantMethod : IResistanceMethod
             trace.Add("Bc", "buckling constant (intercept)", aged ? "Fcy [1 + (Fcy / 2250 ksi)^½]" : "Fcy [1 + (Fcy / 1000 ksi)^½]", bc, StepUnit.Stress, Ref);
             trace.Add("Dc", "buckling constant (slope)", aged ? "(Bc / 10)(Bc / E)^½" : "(Bc / 20)(6 Bc / E)^½", dc, StepUnit.Stress, Ref);
             trace.Add("Cc", "slenderness limit of the inelastic line", aged ? "0.41 Bc / Dc" : "2 Bc / (3 Dc)", cc, StepUnit.None, Ref);
-            trace.Add("S1", "slenderness limit of yielding", "(Bc − Fcy) / Dc", s1, StepUnit.None, Ref);
+            trace.Add("S1", "slenderness limit of yielding", "(Bc − Fcy) / Dc", (bc - fcy) / dc, StepUnit.None, Ref);
             Axis(trace, y, by, fy);
             Axis(trace, z, bz, fz);
             if (Basis == DesignBasis.Lrfd)

@@ -118,7 +118,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
             return Applicability.NotApplicable(
                 $"EN 1999-1-1 needs an aluminium alloy with its f0, fu, buckling class and HAZ factors; \"{member.Member.Material.Name}\" is a {member.MaterialKind} material. Use a preset of AluminiumAlloys or AluminiumAlloy.Create.");
         var section = member.Member.Section;
-        if (!Ec9Section.Supports(section.Kind))
+        if (!Ec9Section.Supports(member.SectionKind))
             return Applicability.NotApplicable(
                 $"EN 1999-1-1 classification needs the flat parts of the section, which a {section.Kind} section does not give; use an I, channel, angle, tee, box or round tube, or a solid bar.");
         bool welded = Welding.Location == WeldLocation.Longitudinal;
@@ -127,7 +127,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         if (!entry.ThicknessCovered)
             return Applicability.NotApplicable(
                 $"the section's thickness ({Guard.Show(c.MinThicknessM * 1e3)}–{Guard.Show(c.MaxThicknessM * 1e3)} mm) is outside the range {Guard.Show(alloy.MinimumThickness.Millimeters)}–{Guard.Show(alloy.MaximumThickness.Millimeters)} mm for which the values of {alloy.Name} hold; use the alloy values for that thickness.");
-        if (IsOpenForTorsion(section.Kind) && !member.HasTorsionalProperties)
+        if (IsOpenForTorsion(member.SectionKind) && !member.HasTorsionalProperties)
             return Applicability.NotApplicable("torsional and flexural-torsional buckling need the torsion constant, warping constant and shear centre, which this section does not give.");
         if (welded && Welding.HeatAffectedAreaM2 >= member.AreaM2)
             return Applicability.NotApplicable(
@@ -140,7 +140,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         {
             if (Welding.IsWelded)
                 return Applicability.NotApplicable("compression with bending of a welded member (the HAZ in the section modulus and ωx of localised welds) is not covered by this method; check the member unwelded with your own HAZ-reduced properties.");
-            if (IsOpenForTorsion(section.Kind) && (actions.EccentricityYM != 0 || actions.EndMomentYTopNm != 0 || actions.EndMomentYBottomNm != 0))
+            if (IsOpenForTorsion(member.SectionKind) && (actions.EccentricityYM != 0 || actions.EndMomentYTopNm != 0 || actions.EndMomentYBottomNm != 0))
                 return Applicability.NotApplicable("bending about the major axis y of an open section can fail by lateral-torsional buckling, which this method does not check; only bending about z is covered for angles, tees, channels and I sections.");
             if (c.Class == 4)
                 return Applicability.NotApplicable("compression with bending of a class 4 section needs the effective section modulus and the shift of the neutral axis, which this method does not compute; choose a section of class 1 to 3.");
@@ -162,7 +162,8 @@ public sealed class Eurocode9Compression : IResistanceMethod
         var plates = entry.Plates;
         double f0 = member.StrengthPa, fu = entry.UltimateStrengthPa, e = member.ElasticModulusPa, g = member.ShearModulusPa, a = member.AreaM2;
         double gm1 = PartialFactorM1, gm2 = PartialFactorM2;
-        double rhoOHaz = alloy.HazProofFactor(Welding.Process), rhoUHaz = alloy.HazUltimateFactor(Welding.Process);
+        // The process was checked when the welding was described, so the factors are read without a second check.
+        double rhoOHaz = alloy.HazProofFactorFor(Welding.Process), rhoUHaz = alloy.HazUltimateFactorFor(Welding.Process);
         double aEff = c.AreaEffM2;
 
         // Steps are written by separate methods (cold code) so that the untraced frame stays small; they get the values computed here.
@@ -183,7 +184,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         double nRdZ = Flexural(trace, z, aEff, f0, alphaF, lam0F, cls, longitudinal, a1 / a, gm1, out double lamZ, out double chiZ, out double kapZ);
 
         // Torsional and flexural-torsional buckling of open sections.
-        bool torsion = IsOpenForTorsion(section.Kind);
+        bool torsion = IsOpenForTorsion(member.SectionKind);
         double nRdT = double.PositiveInfinity, nCrT = double.NaN, lamT = double.NaN, chiT = double.NaN;
         bool coupled = false;
         if (torsion)

@@ -157,9 +157,6 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         Residual(Exposure, b, h, defM, out bFi, out hFi, out shiftZ, out shiftY);
         i.Kmod = Kfi(mat);      // kmod,fi (= 1.0) × kfi: fd,fi = kmod,fi kfi fk / γM,fi (2.1)
         i.GammaM = FireMaterialFactor;
-        // kh is not used to raise strengths in fire; a reduction (LVL deeper than 300 mm) is kept, on the residual depth.
-        i.KhY = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(hFi, 1e-9)), 1.0);
-        i.KhZ = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, Math.Max(bFi, 1e-9)), 1.0);
         i.NEdN = actions.AxialForceN;
         double n = actions.AxialForceN;
         i.MyEdNm = TimberRules.MomentY(actions) + (IncludesCentroidShift ? n * shiftZ : 0);
@@ -172,7 +169,16 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         i.IzM4 = hFi * bFi * bFi * bFi / 12;
         i.WyM3 = bFi * hFi * hFi / 6;
         i.WzM3 = hFi * bFi * bFi / 6;
-        i.TorsionM4 = RectangleSection.TorsionConstantOf(bFi, hFi);
+        i.KhY = i.KhZ = 1.0;
+        if (i.MyEdNm != 0 || i.MzEdNm != 0)
+        {
+            // kh is not used to raise strengths in fire; a reduction (LVL deeper than 300 mm) is kept, on the residual
+            // depth. Only bending reads kh and the torsion constant (lateral torsional buckling), so pure compression skips
+            // their powers and series.
+            i.KhY = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, hFi), 1.0);
+            i.KhZ = Math.Min(Ec5ColumnStability.SizeFactor(mat, true, bFi), 1.0);
+            i.TorsionM4 = RectangleSection.TorsionConstantOf(bFi, hFi);
+        }
         i.LambdaY = i.LefYM / Math.Sqrt(i.IyM4 / i.AreaM2);   // the residual section's radius of gyration
         i.LambdaZ = i.LefZM / Math.Sqrt(i.IzM4 / i.AreaM2);
         i.LambdaRelY = i.LambdaY / Math.PI * mat.SlendernessRoot;   // (6.21) on the residual section

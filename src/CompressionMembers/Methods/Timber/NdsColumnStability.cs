@@ -282,14 +282,18 @@ public sealed class NdsColumnStability : IResistanceMethod
         double area = member.AreaM2;
         double fc = actions.AxialForceN / area;
 
-        double m1 = TimberRules.MomentY(actions), m2 = TimberRules.MomentZ(actions);
-        double s1 = TimberRules.ModulusY(member), s2 = TimberRules.ModulusZ(member);
-        double fb1 = m1 / s1, fb2 = m2 / s2;
+        double m1 = 0, m2 = 0, fb1 = 0, fb2 = 0;
+        if (actions.HasEccentricity || actions.HasEndMoments)   // pure compression skips the bending stresses
+        {
+            m1 = TimberRules.MomentY(actions); m2 = TimberRules.MomentZ(actions);
+            fb1 = m1 / TimberRules.ModulusY(member); fb2 = m2 / TimberRules.ModulusZ(member);
+        }
         bool bending = fb1 > 0 || fb2 > 0;
 
         bool ltb = false;
         double le = double.NaN, rb = double.NaN, fbE = double.PositiveInfinity, cl = 1.0;
-        TimberRules.Dimensions(member, out double bM, out double hM);
+        double bM = 0, hM = 0;
+        if (fb1 > 0) TimberRules.Dimensions(member, out bM, out hM);
         if (member.SectionKind == SectionKind.SolidRectangle && fb1 > 0 && hM > bM)
         {
             ltb = true;
@@ -326,8 +330,8 @@ public sealed class NdsColumnStability : IResistanceMethod
         var mode = bending ? FailureMode.CombinedCompressionAndBending : FailureMode.FlexuralBuckling;
         string check = bending ? "NDS 2018 15.4.1 (15.4-1): eccentric axial compression, 3.9.2 interaction" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
         return new CheckResult(member, actions, this, fcP * area, u, axis, mode, check,
-            new AxisOutcome(member.EffectiveLengthYM, member.EffectiveLengthYM / member.RadiusYM, double.NaN, fcE1 * area, cpY, fcStar * cpY * area),
-            new AxisOutcome(member.EffectiveLengthZM, member.EffectiveLengthZM / member.RadiusZM, double.NaN, fcE2 * area, cpZ, fcStar * cpZ * area),
+            new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, double.NaN, fcE1 * area, cpY, fcStar * cpY * area),
+            new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, double.NaN, fcE2 * area, cpZ, fcStar * cpZ * area),
             ltb ? new AxisOutcome(le, rb, double.NaN, double.NaN, cl, double.NaN) : default, trace);
     }
 
