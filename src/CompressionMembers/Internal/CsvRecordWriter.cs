@@ -44,6 +44,12 @@ internal sealed class CsvRecordWriter
     /// <summary>The text written and not yet passed on.</summary>
     internal StringBuilder Pending => _text;
 
+    /// <summary>Records ended since the writer was made (or <see cref="ResetCount"/>).</summary>
+    internal long Records { get; private set; }
+
+    /// <summary>Sets <see cref="Records"/> back to 0.</summary>
+    internal void ResetCount() => Records = 0;
+
     /// <summary>Writes a text field (null is an empty field).</summary>
     internal void Text(string? value) => Text(value.AsSpan());
 
@@ -109,6 +115,7 @@ internal sealed class CsvRecordWriter
         if (_fieldsInRecord == 1 && _lastFieldEmptyText) _text.Append("\"\"");
         _text.Append('\n');
         _fieldsInRecord = 0;
+        Records++;
         if (_target is not null && _text.Length >= PassOnChars) Flush();
     }
 

@@ -76,8 +76,9 @@ public sealed class ScheduleOutcome
         csv.EndRecord();
     }
 
-    /// <summary>One line of the results CSV (shared with the streamed check).</summary>
-    internal static void WriteCsvRow(CsvRecordWriter csv, ScheduleItem item, CheckResult? result, string? error, string fingerprint)
+    /// <summary>One line of the results CSV (shared with the streamed check, which passes its name memory so that a
+    /// section's designation is formatted once).</summary>
+    internal static void WriteCsvRow(CsvRecordWriter csv, ScheduleItem item, CheckResult? result, string? error, string fingerprint, ScheduleNames? names = null)
     {
         csv.Number(item.Line);
         csv.Text(item.Location);
@@ -92,7 +93,7 @@ public sealed class ScheduleOutcome
             csv.Text(res.GoverningAxis.ToString());
             csv.Text(res.GoverningMode.ToString());
             csv.Text(res.GoverningCheck);
-            csv.Text(res.Member.Section.Designation);
+            csv.Text(names is null ? res.Member.Section.Designation : names.Designation(res.Member.Section));
             csv.Text(res.Method.Identity.Name);
             csv.Text(fingerprint);
             csv.Text("");
