@@ -30,12 +30,13 @@ internal sealed class CsvTable
         return fields;
     }
 
-    /// <summary>Reads and checks the header (the first record that is not a comment or blank line).</summary>
+    /// <summary>Reads and checks the header (the first record that is not a comment or blank line); messages name the
+    /// header's own line.</summary>
     /// <exception cref="FormatException">The header is empty, or has an unknown, repeated or missing column.</exception>
     internal static string[] ReadHeader(CsvRecordReader reader, IReadOnlyList<string> known, IReadOnlyList<string> required, string what)
     {
         var record = new List<string>();
-        reader.Read(record, out _);
+        reader.Read(record, out long line);
         var header = new string[record.Count];
         for (int i = 0; i < header.Length; i++) header[i] = record[i].Trim();
         if (header.Length == 0 || (header.Length == 1 && header[0].Length == 0))
@@ -44,11 +45,11 @@ internal sealed class CsvTable
         foreach (var h in header)
         {
             if (!Contains(known, h))
-                throw new FormatException($"Line 1: unknown column \"{h}\" in the {what}; the columns are {string.Join(", ", known)} (names are case-sensitive).");
-            if (!seen.Add(h)) throw new FormatException($"Line 1: the column \"{h}\" appears twice in the {what}.");
+                throw new FormatException($"Line {line}: unknown column \"{h}\" in the {what}; the columns are {string.Join(", ", known)} (names are case-sensitive).");
+            if (!seen.Add(h)) throw new FormatException($"Line {line}: the column \"{h}\" appears twice in the {what}.");
         }
         foreach (var r in required)
-            if (!seen.Contains(r)) throw new FormatException($"Line 1: the {what} has no column \"{r}\"; it needs {string.Join(", ", required)}.");
+            if (!seen.Contains(r)) throw new FormatException($"Line {line}: the {what} has no column \"{r}\"; it needs {string.Join(", ", required)}.");
         return header;
     }
 
