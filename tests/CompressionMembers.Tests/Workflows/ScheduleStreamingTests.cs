@@ -118,6 +118,23 @@ public class ScheduleStreamingTests
         Assert.Equal((s1.PassedCount, s1.FailedCount, s1.ErrorCount), (s2.PassedCount, s2.FailedCount, s2.ErrorCount));
     }
 
+    [Theory]
+    [InlineData("de-DE")] // decimal comma
+    [InlineData("tr-TR")] // dotted and dotless i
+    [InlineData("ar-SA")] // another calendar and digits
+    public void CheckCsvStreaming_UnderAnyCurrentCulture_GivesTheSameBytes(string culture)
+    {
+        string csv = RandomSchedule(11, 300, out _);
+        string invariant = Streamed(csv, new BatchOptions(2)).Text;
+        var (oc, ou) = (CultureInfo.CurrentCulture, CultureInfo.CurrentUICulture);
+        try
+        {
+            CultureInfo.CurrentCulture = CultureInfo.CurrentUICulture = new CultureInfo(culture);
+            Assert.Equal(invariant, Streamed(csv, new BatchOptions(2)).Text); // the worker threads inherit the culture
+        }
+        finally { (CultureInfo.CurrentCulture, CultureInfo.CurrentUICulture) = (oc, ou); }
+    }
+
     [Fact]
     public void CheckCsvStreaming_MalformedLinesMidStream_BecomeErrorRows()
     {
