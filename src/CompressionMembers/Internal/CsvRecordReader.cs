@@ -38,6 +38,7 @@ internal sealed class CsvRecordReader
     private char _carry;
     private long _line = 1;
     private char[] _field = new char[256];
+    private readonly string?[] _previous = new string?[32];
     private int _fieldLen;
     private long _recordChars;
     private long _recordLine;
@@ -82,7 +83,7 @@ internal sealed class CsvRecordReader
             {
                 bool end = ReadField(out bool quoted);
                 if (quoted || _fieldLen > 0 || !end || fields.Count > 0) blank = false;
-                fields.Add(FieldText());
+                fields.Add(FieldText(fields.Count));
                 if (end) break;
             }
             if (!blank) return true;
@@ -167,7 +168,17 @@ internal sealed class CsvRecordReader
         }
     }
 
-    private string FieldText() => _fieldLen == 0 ? "" : new string(_field, 0, _fieldLen);
+    /// <summary>The field's text. A field equal to the same field of the previous record returns that record's string:
+    /// schedules repeat materials, sections, methods and factors row after row, and this spares a string for each.</summary>
+    private string FieldText(int index)
+    {
+        if (_fieldLen == 0) return "";
+        var text = _field.AsSpan(0, _fieldLen);
+        if (index < _previous.Length && _previous[index] is { } last && text.SequenceEqual(last)) return last;
+        var s = new string(text);
+        if (index < _previous.Length) _previous[index] = s;
+        return s;
+    }
 
     /// <summary>Replaces each UTF-16 surrogate that is not half of a pair with U+FFFD, in place.</summary>
     internal static void ReplaceLoneSurrogates(Span<char> text)
