@@ -28,7 +28,7 @@ public class MillionRowScheduleTests(ITestOutputHelper output)
 
     /// <summary>The managed heap may not pass this at any point of the run, whatever the row count: two chunks of rows
     /// and their results are a few megabytes, and the rest is garbage awaiting a gen-0 collection. (Reading the whole
-    /// schedule into memory instead takes well over a gigabyte for a million rows.)</summary>
+    /// schedule into memory and checking it keeps about 1.1 KB a row instead: 1.1 GB for a million rows, measured.)</summary>
     private const long HeapBoundBytes = 128L << 20;
 
     [Fact]

@@ -27,7 +27,7 @@ internal static class StreamedScheduleCheck
 {
     /// <summary>Rows per chunk: big enough that a chunk's slices outweigh the cost of starting them, small enough that
     /// the two chunks alive at a time (a few megabytes) die young. Measured: 8,192-row chunks lived long enough to be
-    /// promoted and cost gen-2 collections, and ran 20–30 % slower than 2,048 (docs/workflows.md).</summary>
+    /// promoted and cost gen-2 collections, and ran 15–25 % slower than 2,048 (docs/workflows.md).</summary>
     internal const int DefaultChunkRows = 2048;
 
     /// <summary>Slices per chunk: several per core, so a slow slice does not hold up the chunk.</summary>
