@@ -10,14 +10,20 @@ namespace CompressionMembers.Internal;
 /// </summary>
 internal sealed class CanonicalForm
 {
-    private readonly StringBuilder _text = new();
+    private readonly StringBuilder _text;
+
+    internal CanonicalForm() => _text = new StringBuilder();
+
+    /// <summary>A form that writes into <paramref name="text"/> (a builder reused from check to check).</summary>
+    internal CanonicalForm(StringBuilder text) => _text = text;
 
     internal CanonicalForm Add(string key, double siValue)
     {
         // Twelve significant digits absorb the last-bit noise of unit conversion (25.4 mm per inch, 6894.757 Pa per
-        // psi), so the same member typed in other units gives the same fingerprint; -0 is written as 0.
+        // psi), so the same member typed in other units gives the same fingerprint; -0 is written as 0. (The same
+        // text as siValue.ToString("G12", invariant), formatted in place.)
         if (siValue == 0) siValue = 0;
-        _text.Append(key).Append('=').Append(siValue.ToString("G12", CultureInfo.InvariantCulture)).Append('\n');
+        _text.Append(key).Append('=').Append(CultureInfo.InvariantCulture, $"{siValue:G12}").Append('\n');
         return this;
     }
 

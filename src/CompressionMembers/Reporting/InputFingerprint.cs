@@ -29,9 +29,45 @@ public static class InputFingerprint
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     public static string Compute(Member member, DesignActions actions, IResistanceMethod method)
     {
-        var text = CanonicalText(member, actions, method);
-        var hash = SHA256.HashData(Encoding.UTF8.GetBytes(text));
-        return "c1-" + Convert.ToHexStringLower(hash, 0, 8);
+        // A schedule computes one fingerprint per row, so the text, its UTF-8 bytes and the hash live in buffers kept per
+        // thread; only the result string is allocated. (Taken out of the slot while in use, in case a user's material
+        // computes a fingerprint of its own while being written.)
+        var text = t_text ?? new StringBuilder(2048);
+        t_text = null;
+        try
+        {
+            text.Clear();
+            Write(new CanonicalForm(text), member, actions, method);
+            var chars = t_chars is { } c && c.Length >= text.Length ? c : (t_chars = new char[Math.Max(2048, text.Length)]);
+            text.CopyTo(0, chars, 0, text.Length);
+            int maxBytes = Encoding.UTF8.GetMaxByteCount(text.Length);
+            var bytes = t_bytes is { } b && b.Length >= maxBytes ? b : (t_bytes = new byte[Math.Max(6144, maxBytes)]);
+            int n = Encoding.UTF8.GetBytes(chars, 0, text.Length, bytes, 0);
+            Span<byte> hash = stackalloc byte[32];
+            SHA256.HashData(bytes.AsSpan(0, n), hash);
+            Span<char> hex = stackalloc char[16];
+            if (!Convert.TryToHexStringLower(hash[..8], hex, out _)) throw new InvalidOperationException("16 hex digits did not fit");
+            return string.Concat("c1-", hex);
+        }
+        finally
+        {
+            if (text.Capacity <= 1 << 16) t_text = text;
+        }
+    }
+
+    [ThreadStatic] private static StringBuilder? t_text;
+    [ThreadStatic] private static char[]? t_chars;
+    [ThreadStatic] private static byte[]? t_bytes;
+
+    private static void Write(CanonicalForm form, Member member, DesignActions actions, IResistanceMethod method)
+    {
+        ArgumentNullException.ThrowIfNull(member);
+        ArgumentNullException.ThrowIfNull(actions);
+        ArgumentNullException.ThrowIfNull(method);
+        member.AddCanonical(form);
+        actions.AddCanonical(form);
+        form.Add("method.type", method.GetType().FullName ?? method.GetType().Name);
+        method.Identity.AddCanonical(form);
     }
 
     /// <summary>The canonical text the fingerprint hashes, for inspection.</summary>
@@ -42,14 +78,8 @@ public static class InputFingerprint
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     public static string CanonicalText(Member member, DesignActions actions, IResistanceMethod method)
     {
-        ArgumentNullException.ThrowIfNull(member);
-        ArgumentNullException.ThrowIfNull(actions);
-        ArgumentNullException.ThrowIfNull(method);
         var form = new CanonicalForm();
-        member.AddCanonical(form);
-        actions.AddCanonical(form);
-        form.Add("method.type", method.GetType().FullName ?? method.GetType().Name);
-        method.Identity.AddCanonical(form);
+        Write(form, member, actions, method);
         return form.ToString();
     }
 }

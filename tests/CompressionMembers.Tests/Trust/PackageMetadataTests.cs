@@ -50,6 +50,17 @@ public class PackageMetadataTests
     }
 
     [Fact]
+    public void PackageProject_DependsOnlyOnUnitsNetAndMathNet()
+    {
+        // DESIGN.md: the core keeps only UnitsNet and MathNet.Numerics as dependencies (CSV is read and written by our own
+        // code); analyzers that do not flow to consumers (PrivateAssets="all") are not dependencies.
+        var dependencies = Project().Elements("ItemGroup").Elements("PackageReference")
+            .Where(e => (string?)e.Attribute("PrivateAssets") != "all")
+            .Select(e => (string)e.Attribute("Include")!).Order(System.StringComparer.Ordinal).ToArray();
+        Assert.Equal(["MathNet.Numerics", "UnitsNet"], dependencies);
+    }
+
+    [Fact]
     public void Build_IsContinuousIntegrationOnCi()
     {
         // Directory.Build.props: ContinuousIntegrationBuild when CI=true, which normalises source paths in the PDB.

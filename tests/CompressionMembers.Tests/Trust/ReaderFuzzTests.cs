@@ -11,7 +11,8 @@ namespace CompressionMembers.Tests.Trust;
 /// Mutation fuzzing of the schedule readers (seeded, bounded in time): random byte flips, deletions, insertions,
 /// duplications and truncations of a valid CSV and JSON schedule. Each input must either read — and then check with
 /// one result or error row per item — or be refused with the documented FormatException/ArgumentException. No other
-/// exception, no hang (each run is bounded by its own time budget), no unbounded memory (the JSON size limit).
+/// exception, no hang (each run is bounded by its own time budget), no unbounded memory (the JSON size limit). Each CSV
+/// input is also checked by the streamed path, which must write the same bytes or refuse it the same way.
 /// </summary>
 public class ReaderFuzzTests(ITestOutputHelper output)
 {
@@ -71,10 +72,30 @@ public class ReaderFuzzTests(ITestOutputHelper output)
                     ? MemberSchedule.ReadJson(new MemoryStream(input), "fuzz")
                     : MemberSchedule.ReadCsv(new StringReader(Encoding.UTF8.GetString(input)), "fuzz");
             }
-            catch (Exception e) when (e is FormatException or ArgumentException) { refused++; continue; }
+            catch (Exception e) when (e is FormatException or ArgumentException)
+            {
+                // The streamed check refuses the same CSV inputs, with the same type of error, before writing anything.
+                if (!json)
+                {
+                    var nothing = new StringWriter();
+                    Assert.ThrowsAny<FormatException>(() => ScheduleChecker.CheckCsvStreamingInChunks(new StringReader(Encoding.UTF8.GetString(input)), nothing, null, null, 2));
+                    Assert.Equal("", nothing.ToString());
+                }
+                refused++;
+                continue;
+            }
             catch (Exception e) { throw new Xunit.Sdk.XunitException($"seed {seed}: undocumented {e.GetType().Name} for input «{Encoding.UTF8.GetString(input)}»: {e.Message}"); }
             var outcome = ScheduleChecker.Check(schedule);
             Assert.Equal(schedule.Items.Count, outcome.Rows.Count); // every row accounted for
+            if (!json)
+            {
+                // The streamed check of the same text (chunks of 2 rows) writes the same bytes and counts every row.
+                var streamed = new StringWriter();
+                var summary = ScheduleChecker.CheckCsvStreamingInChunks(new StringReader(Encoding.UTF8.GetString(input)), streamed, null, null, 2);
+                Assert.Equal(outcome.ToCsv(), streamed.ToString());
+                Assert.Equal(schedule.Items.Count, summary.RowsRead);
+                Assert.True(summary.AllRowsAccountedFor);
+            }
             read++;
         }
         return (read, refused);

@@ -86,6 +86,13 @@ public class ScheduleTests
     }
 
     [Fact]
+    public void ReadCsv_BadHeaderAfterComments_NamesTheHeadersOwnLine()
+    {
+        var ex = Assert.Throws<FormatException>(() => MemberSchedule.ReadCsv(new StringReader("# a comment\n\nmember,material,section,method,length_mm,N_kN,colour\n"), "x"));
+        Assert.StartsWith("Line 3: unknown column \"colour\"", ex.Message); // line 1 a comment, line 2 blank
+    }
+
+    [Fact]
     public void ReadCsv_MissingRequiredColumn_IsAFileError()
     {
         var ex = Assert.Throws<FormatException>(() => MemberSchedule.ReadCsv(new StringReader("member,material,section,method,length_mm\n"), "x"));

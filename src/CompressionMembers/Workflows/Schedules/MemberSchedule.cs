@@ -60,19 +60,49 @@ public sealed class MemberSchedule
     /// <exception cref="FormatException">The header is wrong (unknown, repeated or missing column).</exception>
     public static MemberSchedule ReadCsv(TextReader reader, string name, NameRegistry? registry = null)
     {
-        registry ??= NameRegistry.Default;
         var table = CsvTable.Read(reader, CsvColumns, RequiredColumns, "schedule CSV");
-        var items = new List<ScheduleItem>(table.Rows.Count);
-        foreach (var (line, fields, extra) in table.Rows)
+        var columns = ColumnIndex(table.Header);
+        var names = new ScheduleNames(registry ?? NameRegistry.Default);
+        var items = new ScheduleItem[table.Rows.Count];
+        for (int i = 0; i < items.Length; i++)
         {
-            string? G(string c) => table.Get(fields, c);
-            var row = new RowText(G("member"), G("case"), G("material"), G("section"), G("method"), G("length_mm"), G("K_y"), G("K_z"), G("K_t"),
-                G("N_kN"), G("ey_mm"), G("ez_mm"), G("My_top_kNm"), G("My_bottom_kNm"), G("Mz_top_kNm"), G("Mz_bottom_kNm"), G("bow_y_mm"), G("bow_z_mm"), G("duration"));
-            items.Add(extra
-                ? new ScheduleItem(line, $"line {line}", row.Member ?? "", row.Case ?? "", null, null, null, "the line has more fields than the header.")
-                : Build(line, $"line {line}", row, registry));
+            var (line, fields, extra) = table.Rows[i];
+            items[i] = CsvItem(line, fields, extra, columns, names);
         }
-        return new MemberSchedule(string.IsNullOrWhiteSpace(name) ? "schedule" : name, items.ToArray());
+        return new MemberSchedule(string.IsNullOrWhiteSpace(name) ? "schedule" : name, items);
+    }
+
+    /// <summary>Reads and checks the header of a CSV schedule.</summary>
+    /// <returns>The header's column names.</returns>
+    /// <exception cref="FormatException">The header is empty, or has an unknown, repeated or missing column.</exception>
+    internal static string[] ReadCsvHeader(CsvRecordReader reader) => CsvTable.ReadHeader(reader, CsvColumns, RequiredColumns, "schedule CSV");
+
+    /// <summary>For each of <see cref="CsvColumns"/>, its position in the header, or -1.</summary>
+    internal static int[] ColumnIndex(string[] header)
+    {
+        var index = new int[CsvColumns.Count];
+        for (int c = 0; c < index.Length; c++) index[c] = Array.IndexOf(header, CsvColumns[c]);
+        return index;
+    }
+
+    /// <summary>The item of one CSV line: <paramref name="fields"/> in header order (missing ones empty), <paramref name="extra"/>
+    /// when the line had more fields than the header.</summary>
+    internal static ScheduleItem CsvItem(long line, string[] fields, bool extra, int[] columns, ScheduleNames names)
+    {
+        static string? G(string[] fields, int[] columns, int c)
+        {
+            int i = columns[c];
+            return i < 0 || string.IsNullOrWhiteSpace(fields[i]) ? null : fields[i];
+        }
+        // Positions in CsvColumns, in RowText's order.
+        var row = new RowText(G(fields, columns, 0), G(fields, columns, 1), G(fields, columns, 2), G(fields, columns, 3), G(fields, columns, 4),
+            G(fields, columns, 5), G(fields, columns, 6), G(fields, columns, 7), G(fields, columns, 8), G(fields, columns, 9), G(fields, columns, 10),
+            G(fields, columns, 11), G(fields, columns, 12), G(fields, columns, 13), G(fields, columns, 14), G(fields, columns, 15), G(fields, columns, 16),
+            G(fields, columns, 17), G(fields, columns, 18));
+        string location = "line " + line.ToString(CultureInfo.InvariantCulture);
+        return extra
+            ? new ScheduleItem(line, location, row.Member ?? "", row.Case ?? "", null, null, null, "the line has more fields than the header.")
+            : Build(line, location, row, names);
     }
 
     /// <summary>Reads a JSON schedule.</summary>
@@ -84,7 +114,7 @@ public sealed class MemberSchedule
     /// <exception cref="FormatException">The JSON is invalid, has an unknown field, is too large or too deep, or has the wrong format tag.</exception>
     public static MemberSchedule ReadJson(Stream stream, string name, NameRegistry? registry = null, long maxBytes = StrictJson.DefaultMaxBytes)
     {
-        registry ??= NameRegistry.Default;
+        var names = new ScheduleNames(registry ?? NameRegistry.Default);
         byte[] bytes = StrictJson.ReadLimited(stream ?? throw new ArgumentNullException(nameof(stream)), maxBytes, "schedule JSON");
         var dto = StrictJson.Read(new MemoryStream(bytes, false), WorkflowJsonContext.Default.ScheduleFileDto, maxBytes, "schedule JSON");
         if (dto.Format != JsonFormat) throw new FormatException($"The schedule JSON has format \"{dto.Format}\"; expected \"{JsonFormat}\".");
@@ -106,7 +136,7 @@ public sealed class MemberSchedule
                 long line = lines.Cases.TryGetValue((i, j), out var l) ? l : memberLine;
                 var row = new RowText(m.Member, c.Case, m.Material, m.Section, m.Method, Num(m.LengthMm), Num(m.Ky), Num(m.Kz), Num(m.Kt),
                     Num(c.NkN), Num(c.EyMm), Num(c.EzMm), Num(c.MyTop), Num(c.MyBottom), Num(c.MzTop), Num(c.MzBottom), Num(c.BowY), Num(c.BowZ), c.Duration);
-                items.Add(Build(line, $"members[{i}].cases[{j}]", row, registry));
+                items.Add(Build(line, $"members[{i}].cases[{j}]", row, names));
             }
         }
         return new MemberSchedule(string.IsNullOrWhiteSpace(name) ? "schedule" : name, items.ToArray());
@@ -156,16 +186,16 @@ public sealed class MemberSchedule
     private sealed record RowText(string? Member, string? Case, string? Material, string? Section, string? Method, string? LengthMm, string? Ky, string? Kz, string? Kt,
         string? NkN, string? EyMm, string? EzMm, string? MyTop, string? MyBottom, string? MzTop, string? MzBottom, string? BowY, string? BowZ, string? Duration);
 
-    private static ScheduleItem Build(long line, string location, RowText r, NameRegistry registry)
+    private static ScheduleItem Build(long line, string location, RowText r, ScheduleNames names)
     {
         string memberName = r.Member?.Trim() ?? "";
         string caseName = r.Case?.Trim() ?? "";
         try
         {
             if (memberName.Length == 0) throw new FormatException("the member name is empty.");
-            var material = registry.Material(Need(r.Material, "material"));
-            var section = registry.Section(Need(r.Section, "section"));
-            var method = registry.Method(Need(r.Method, "method"));
+            var material = names.Material(Need(r.Material, "material"));
+            var section = names.Section(Need(r.Section, "section"));
+            var method = names.Method(Need(r.Method, "method"));
             double lengthMm = Required(Need(r.LengthMm, "length_mm"), "length_mm");
             var restraint = new Restraint(
                 AxisRestraint.FromBucklingFactor(Number(r.Ky, "K_y") ?? 1.0, "given in the schedule"),
@@ -190,13 +220,13 @@ public sealed class MemberSchedule
             }
             return new ScheduleItem(line, location, memberName, caseName, member, actions, method, null);
         }
-        catch (Exception ex) when (ex is ArgumentException or FormatException or KeyNotFoundException)
+        catch (Exception ex) when (ScheduleNames.IsRowError(ex))
         {
             return new ScheduleItem(line, location, memberName, caseName, null, null, null, FirstLine(ex.Message));
         }
     }
 
-    private static string FirstLine(string message)
+    internal static string FirstLine(string message)
     {
         int i = message.IndexOf(" (Parameter '", StringComparison.Ordinal);
         return i > 0 ? message[..i] : message;

@@ -6,7 +6,6 @@ using System.Text;
 using CompressionMembers.Internal;
 using CompressionMembers.Reporting;
 using CompressionMembers.Results;
-using CsvHelper;
 
 namespace CompressionMembers.Workflows.Schedules;
 
@@ -63,38 +62,48 @@ public sealed class ScheduleOutcome
     public void WriteCsv(TextWriter writer)
     {
         ArgumentNullException.ThrowIfNull(writer);
-        var options = new CsvWriterOptions { Injection = CsvInjection.Escape, NewLine = "\n", FormatProvider = Inv };
-        using var csv = CsvWriter.Create(writer, options, true);
-        csv.WriteHeader([.. ResultColumns]);
-        foreach (var r in _rows)
-        {
-            var item = r.Item;
-            csv.WriteField(item.Line, default);
-            csv.WriteField(item.Location);
-            csv.WriteField(item.MemberName);
-            csv.WriteField(item.CaseName);
-            csv.WriteField(r.Status.ToString().ToLowerInvariant());
-            if (r.Result is { } res)
-            {
-                csv.WriteField(res.Utilisation, default);
-                csv.WriteField(res.Actions.AxialCompression.Newtons / 1e3, default);
-                csv.WriteField(res.DesignResistanceN / 1e3, default);
-                csv.WriteField(res.GoverningAxis.ToString());
-                csv.WriteField(res.GoverningMode.ToString());
-                csv.WriteField(res.GoverningCheck);
-                csv.WriteField(res.Member.Section.Designation);
-                csv.WriteField(res.Method.Identity.Name);
-                csv.WriteField(r.Fingerprint);
-                csv.WriteField("");
-            }
-            else
-            {
-                for (int i = 0; i < 9; i++) csv.WriteField("");
-                csv.WriteField(r.Error ?? "");
-            }
-            csv.EndRecord();
-        }
+        var csv = new CsvRecordWriter(writer);
+        WriteCsvHeader(csv);
+        foreach (var r in _rows) WriteCsvRow(csv, r.Item, r.Result, r.Error, r.Fingerprint);
         csv.Flush();
+        writer.Flush();
+    }
+
+    /// <summary>The header line of the results CSV (shared with the streamed check, so that both give the same bytes).</summary>
+    internal static void WriteCsvHeader(CsvRecordWriter csv)
+    {
+        foreach (var c in ResultColumns) csv.Text(c);
+        csv.EndRecord();
+    }
+
+    /// <summary>One line of the results CSV (shared with the streamed check, which passes its name memory so that a
+    /// section's designation is formatted once).</summary>
+    internal static void WriteCsvRow(CsvRecordWriter csv, ScheduleItem item, CheckResult? result, string? error, string fingerprint, ScheduleNames? names = null)
+    {
+        csv.Number(item.Line);
+        csv.Text(item.Location);
+        csv.Text(item.MemberName);
+        csv.Text(item.CaseName);
+        csv.Text(result is { } r0 ? (r0.Passed ? "passed" : "failed") : "error");
+        if (result is { } res)
+        {
+            csv.Number(res.Utilisation);
+            csv.Number(res.Actions.AxialCompression.Newtons / 1e3);
+            csv.Number(res.DesignResistanceN / 1e3);
+            csv.Text(res.GoverningAxis.ToString());
+            csv.Text(res.GoverningMode.ToString());
+            csv.Text(res.GoverningCheck);
+            csv.Text(names is null ? res.Member.Section.Designation : names.Designation(res.Member.Section));
+            csv.Text(res.Method.Identity.Name);
+            csv.Text(fingerprint);
+            csv.Text("");
+        }
+        else
+        {
+            for (int i = 0; i < 9; i++) csv.Text("");
+            csv.Text(error ?? "");
+        }
+        csv.EndRecord();
     }
 
     /// <summary>The results CSV as a string.</summary>

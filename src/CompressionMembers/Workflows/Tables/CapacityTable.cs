@@ -1,7 +1,6 @@
 using System;
 using System.Collections.Generic;
 using System.Globalization;
-using System.IO;
 using System.Text;
 using CompressionMembers.Actions;
 using CompressionMembers.Internal;
@@ -13,7 +12,6 @@ using CompressionMembers.Resolution;
 using CompressionMembers.Restraints;
 using CompressionMembers.Workflows.Batch;
 using CompressionMembers.Workflows.Catalogues;
-using CsvHelper;
 using UnitsNet;
 
 namespace CompressionMembers.Workflows.Tables;
@@ -138,24 +136,21 @@ public sealed class CapacityTable
     /// <returns>The CSV text.</returns>
     public string ToCsv()
     {
-        var sw = new StringWriter(Inv);
-        using (var csv = CsvWriter.Create(sw, new CsvWriterOptions { Injection = CsvInjection.Escape, NewLine = "\n", FormatProvider = Inv }, true))
+        var text = new StringBuilder();
+        var csv = new CsvRecordWriter(text);
+        csv.Text("section");
+        for (int j = 0; j < _lengths.Length; j++) csv.Text("N_Rd_kN@L_cr_mm=" + _lengths[j].Millimeters.ToString("R", Inv));
+        csv.EndRecord();
+        for (int i = 0; i < _sections.Length; i++)
         {
-            var header = new string[_lengths.Length + 1];
-            header[0] = "section";
-            for (int j = 0; j < _lengths.Length; j++) header[j + 1] = "N_Rd_kN@L_cr_mm=" + _lengths[j].Millimeters.ToString("R", Inv);
-            csv.WriteHeader(header);
-            for (int i = 0; i < _sections.Length; i++)
+            csv.Text(_sections[i].Designation);
+            for (int j = 0; j < _lengths.Length; j++)
             {
-                csv.WriteField(_sections[i].Designation);
-                for (int j = 0; j < _lengths.Length; j++)
-                {
-                    if (double.IsNaN(_resistanceN[i][j])) csv.WriteField("");
-                    else csv.WriteField(_resistanceN[i][j] / 1e3, default);
-                }
-                csv.EndRecord();
+                if (double.IsNaN(_resistanceN[i][j])) csv.Text("");
+                else csv.Number(_resistanceN[i][j] / 1e3);
             }
+            csv.EndRecord();
         }
-        return sw.ToString();
+        return text.ToString();
     }
 }
