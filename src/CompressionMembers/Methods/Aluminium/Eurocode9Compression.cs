@@ -149,7 +149,59 @@ public sealed class Eurocode9Compression : IResistanceMethod
     }
 
     /// <inheritdoc/>
-    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
+        Welding.Location == WeldLocation.None && !IsOpenForTorsion(member.SectionKind) && !(actions.HasEccentricity || actions.HasEndMoments)
+            ? EvaluateFlexural(member, actions, trace)
+            : EvaluateGeneral(member, actions, trace);
+
+    // An unwelded closed or solid section in compression: flexural buckling about both axes only (6.3.1.1, 6.3.1.2), straight
+    // on the member's resolved values — the path of sweeps. It writes the same steps in the same order as the general path,
+    // and a test holds the two bit for bit; the traced and untraced checks both take it.
+    private CheckResult EvaluateFlexural(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        var alloy = (AluminiumAlloy)member.Member.Material;
+        var entry = Ec9ClassificationCache.Get(member.Member.Section, alloy, false);
+        ref readonly var c = ref entry.Result;
+        double f0 = member.StrengthPa, aEff = c.AreaEffM2, gm1 = PartialFactorM1;
+        var cls = alloy.BucklingClass;
+        if (trace is not null)
+            TraceInputs(trace, member, alloy, c, entry.Plates, f0, entry.UltimateStrengthPa, member.ElasticModulusPa, member.ShearModulusPa, cls, false);
+        Ec9Rules.FlexuralCurve(cls, out double alpha, out double lam0);
+        if (trace is not null) TraceCurve(trace, cls, alpha, lam0);
+        // λ̄ = √(Aeff f0 / Ncr) with Ncr of the gross section, χ of the alloy's curve, N b,Rd = κ χ Aeff f0 / γM1 with κ = 1.
+        double lamY = Math.Sqrt(aEff * f0 / member.CriticalForceYN), lamZ = Math.Sqrt(aEff * f0 / member.CriticalForceZN);
+        double chiY = Ec9Rules.Chi(lamY, alpha, lam0), chiZ = Ec9Rules.Chi(lamZ, alpha, lam0);
+        double nRdY = 1.0 * chiY * aEff * f0 / gm1, nRdZ = 1.0 * chiZ * aEff * f0 / gm1;
+        if (trace is not null) TraceFlexural(trace, member, alpha, lam0, cls, lamY, chiY, nRdY, lamZ, chiZ, nRdZ);
+
+        double nRd = nRdY; var axis = BucklingAxis.Y; var mode = FailureMode.FlexuralBuckling; string check = CheckFlexY;
+        if (nRdZ < nRd) { nRd = nRdZ; axis = BucklingAxis.Z; check = CheckFlexZ; }
+        if (c.Class == 4 && (axis == BucklingAxis.Y ? chiY : chiZ) >= 1) { mode = FailureMode.LocalBuckling; check = CheckLocal; }
+        double nEd = actions.AxialForceN;
+        double u = nEd / nRd;
+        if (trace is not null)
+        {
+            TraceAxial(trace, nRd, check, nEd, u);
+            trace.Add("u", "utilisation", "governing value", u, StepUnit.None, Std);
+        }
+        return new CheckResult(member, actions, this, nRd, u, axis, mode, check,
+            new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lamY, member.CriticalForceYN, chiY * 1.0, nRdY),
+            new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lamZ, member.CriticalForceZN, chiZ * 1.0, nRdZ),
+            default, trace);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceFlexural(CalculationTrace trace, in ResolvedMember member, double alpha, double lam0, BucklingClass cls,
+        double lamY, double chiY, double nRdY, double lamZ, double chiZ, double nRdZ)
+    {
+        FlexuralSteps(trace, new AxisData(member, BucklingAxis.Y), alpha, lam0, cls, false, lamY, chiY, 1.0, nRdY);
+        FlexuralSteps(trace, new AxisData(member, BucklingAxis.Z), alpha, lam0, cls, false, lamZ, chiZ, 1.0, nRdZ);
+        trace.Note("Closed and solid sections are not susceptible to torsional buckling; only flexural modes are checked.", "EN 1999-1-1 6.3.1.4");
+    }
+
+    /// <summary>Every mode: flexural, torsional and flexural-torsional buckling, welds (HAZ), the welded cross-section, and
+    /// compression with bending.</summary>
+    internal CheckResult EvaluateGeneral(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         var alloy = (AluminiumAlloy)member.Member.Material;
         var section = member.Member.Section;

@@ -192,14 +192,12 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         double gammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
         double betaC = En1995Factors.BetaCUnchecked(mat.Product);
         double lrY = member.RelativeSlendernessY, lrZ = member.RelativeSlendernessZ;   // (6.21), (6.22)
-        double kY = Ec5Kernel.K(lrY, betaC), kZ = Ec5Kernel.K(lrZ, betaC);            // (6.27), (6.28)
-        double kcY = Ec5Kernel.KcFromK(lrY, kY), kcZ = Ec5Kernel.KcFromK(lrZ, kZ);     // (6.25), (6.26)
         double fc0d = kmod * member.StrengthPa / gammaM;                              // (2.14)
         double sigma = actions.AxialForceN / member.AreaM2;
-        double uY = sigma / (kcY * fc0d), uZ = sigma / (kcZ * fc0d);
+        Ec5Kernel.Compression(lrY, lrZ, betaC, fc0d, sigma, member.AreaM2,            // (6.25)–(6.28)
+            out double kY, out double kZ, out double kcY, out double kcZ, out double uY, out double uZ, out double resistance);
         bool aboutY = uY >= uZ;
         double u = Math.Max(uY, uZ);
-        double resistance = Math.Min(kcY, kcZ) * fc0d * member.AreaM2;
         if (trace is not null)
             TraceCompression(trace, member, actions, mat, kmod, gammaM, lrY, lrZ, kY, kZ, kcY, kcZ, fc0d, sigma, uY, uZ, aboutY, u, resistance);
         double kcGov = aboutY ? kcY : kcZ;
@@ -232,7 +230,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     }
 
     // Compression with bending: the shared kernel (6.19/6.20 or 6.23/6.24, and 6.35), also used by the fire method.
-    private CheckResult EvaluateWithBending(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    internal CheckResult EvaluateWithBending(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         var mat = (TimberMaterial)member.Member.Material;
         var i = default(Ec5Input);

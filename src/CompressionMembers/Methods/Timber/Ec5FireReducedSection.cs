@@ -196,7 +196,61 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     }
 
     /// <inheritdoc/>
-    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
+        actions.HasEccentricity || actions.HasEndMoments || (IncludesCentroidShift && Exposure != FireExposure.FourSides)
+            ? EvaluateGeneral(member, actions, trace)
+            : EvaluateCompression(member, actions, trace);
+
+    // Pure compression of the residual section (no eccentricity, no end moments, no centroid shift): straight on scalars
+    // with the kernel's compression core, the same operations as the general path (a test holds them bit for bit). The
+    // traced and untraced checks both take it.
+    private CheckResult EvaluateCompression(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        var mat = (TimberMaterial)member.Member.Material;
+        TimberRules.Dimensions(member, out double b, out double h);
+        double def = EffectiveDepth(_tReqS, BetaN(mat));
+        Residual(Exposure, b, h, def, out double bFi, out double hFi, out _, out _);
+        if (!(bFi > 0) || !(hFi > 0)) return EvaluateGeneral(member, actions, trace);   // burnt away: the general path says so
+        double a = bFi * hFi, iy = bFi * hFi * hFi * hFi / 12, iz = hFi * bFi * bFi * bFi / 12;
+        double lefY = member.EffectiveLengthYM, lefZ = member.EffectiveLengthZM;
+        double lamY = lefY / Math.Sqrt(iy / a), lamZ = lefZ / Math.Sqrt(iz / a);   // the residual section's slenderness
+        double lrY = lamY / Math.PI * mat.SlendernessRoot, lrZ = lamZ / Math.PI * mat.SlendernessRoot;   // (6.21), (6.22)
+        double kfi = Kfi(mat);
+        double fd = kfi * member.StrengthPa / FireMaterialFactor;                 // EN 1995-1-2 (2.1) with kmod,fi = 1
+        double sigma = actions.AxialForceN / a;
+        Ec5Kernel.Compression(lrY, lrZ, En1995Factors.BetaCUnchecked(mat.Product), fd, sigma, a,
+            out double kY, out double kZ, out double kcY, out double kcZ, out double uY, out double uZ, out double resistance);
+        bool aboutY = uY >= uZ;
+        if (trace is not null)
+            TraceCompression(trace, member, actions, mat, def, bFi, hFi, lamY, lamZ, lrY, lrZ, kY, kZ, kcY, kcZ, fd, sigma, uY, uZ, aboutY, resistance);
+        double kcGov = aboutY ? kcY : kcZ;
+        double e20 = kfi * member.ElasticModulusPa / FireMaterialFactor;
+        return new CheckResult(member, actions, this, resistance, Math.Max(uY, uZ), aboutY ? BucklingAxis.Y : BucklingAxis.Z,
+            kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling, aboutY ? CheckCompressionY : CheckCompressionZ,
+            new AxisOutcome(lefY, lamY, lrY, Math.PI * Math.PI * e20 * iy / (lefY * lefY), kcY, kcY * fd * a),
+            new AxisOutcome(lefZ, lamZ, lrZ, Math.PI * Math.PI * e20 * iz / (lefZ * lefZ), kcZ, kcZ * fd * a),
+            default, trace);
+    }
+
+    // The kernel records rebuilt from the values the compression path computed, for the shared trace writer.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void TraceCompression(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat,
+        double def, double bFi, double hFi, double lamY, double lamZ, double lrY, double lrZ, double kY, double kZ, double kcY, double kcZ,
+        double fd, double sigma, double uY, double uZ, bool aboutY, double resistance)
+    {
+        var i = default(Ec5Input);
+        Input(member, actions, mat, _tReqS, ref i, out _, out _, out _, out _, out _);
+        var o = default(Ec5Output);
+        o.LambdaY = lamY; o.LambdaZ = lamZ; o.LambdaRelY = lrY; o.LambdaRelZ = lrZ; o.KY = kY; o.KZ = kZ; o.KcY = kcY; o.KcZ = kcZ;
+        o.Fc0dPa = fd; o.SigmaCPa = sigma; o.Stocky = lrY <= 0.3 && lrZ <= 0.3; o.UY = uY; o.UZ = uZ;
+        o.Governs = aboutY ? Governing.AboutY : Governing.AboutZ; o.Utilisation = Math.Max(uY, uZ); o.ResistanceN = resistance;
+        WriteTrace(trace, member, actions, mat, i, o, true, def, bFi, hFi, 0, 0);
+    }
+
+    private const string CheckCompressionY = "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about y";
+    private const string CheckCompressionZ = "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about z";
+
+    internal CheckResult EvaluateGeneral(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         var mat = (TimberMaterial)member.Member.Material;
         var i = default(Ec5Input);
@@ -279,8 +333,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     private static string FireCheckName(in Ec5Output o) => o.Governs switch
     {
         Governing.Ltb => "EN 1995-1-2 4.2.2 with EN 1995-1-1 (6.35): residual section, lateral torsional buckling",
-        Governing.AboutY when !o.Bending => "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about y",
-        Governing.AboutZ when !o.Bending => "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about z",
+        Governing.AboutY when !o.Bending => CheckCompressionY,
+        Governing.AboutZ when !o.Bending => CheckCompressionZ,
         Governing.AboutY => o.Stocky ? "EN 1995-1-2 4.2.2 with EN 1995-1-1 (6.19): residual section" : "EN 1995-1-2 4.2.2 with EN 1995-1-1 (6.23): residual section",
         _ => o.Stocky ? "EN 1995-1-2 4.2.2 with EN 1995-1-1 (6.20): residual section" : "EN 1995-1-2 4.2.2 with EN 1995-1-1 (6.24): residual section",
     };

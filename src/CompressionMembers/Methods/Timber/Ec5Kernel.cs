@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Results;
 
 namespace CompressionMembers.Methods.Timber;
@@ -63,6 +64,21 @@ internal static class Ec5Kernel
     internal static double KcFromK(double lambdaRel, double k) =>
         lambdaRel <= 0.3 ? 1.0 : 1 / (k + Math.Sqrt(k * k - lambdaRel * lambdaRel));
 
+    /// <summary>The pure compression check on scalars — (6.25)–(6.28) about both axes, then σc,0,d ≤ kc fc,0,d — shared
+    /// by the straight-line compression paths of the column and fire methods; the same operations as <see cref="Run"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static void Compression(double lrY, double lrZ, double betaC, double fc0dPa, double sigmaCPa, double areaM2,
+        out double kY, out double kZ, out double kcY, out double kcZ, out double uY, out double uZ, out double resistanceN)
+    {
+        kY = K(lrY, betaC);
+        kZ = K(lrZ, betaC);
+        kcY = KcFromK(lrY, kY);
+        kcZ = KcFromK(lrZ, kZ);
+        uY = sigmaCPa / (kcY * fc0dPa);
+        uZ = sigmaCPa / (kcZ * fc0dPa);
+        resistanceN = Math.Min(kcY, kcZ) * fc0dPa * areaM2;
+    }
+
     internal static void Run(in Ec5Input i, out Ec5Output o)
     {
         o = default;
@@ -92,8 +108,8 @@ internal static class Ec5Kernel
         o.ResistanceN = Math.Min(o.KcY, o.KcZ) * o.Fc0dPa * i.AreaM2;
     }
 
-    // Compression with bending (6.19/6.20 or 6.23/6.24) and lateral torsional stability (6.35); kept apart so that the
-    // pure compression path stays short.
+    // Compression with bending (6.19/6.20 or 6.23/6.24) and lateral torsional stability (6.35).
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Bending(in Ec5Input i, ref Ec5Output o)
     {
         o.FmydPa = i.Kmod * i.KhY * i.FmkPa / i.GammaM;
@@ -116,10 +132,13 @@ internal static class Ec5Kernel
         o.LtbChecked = i.CheckLtb && i.Rectangular && o.SigmaMyPa > 0;
         if (o.LtbChecked)
         {
-            o.G005Pa = i.GMeanPa * i.E005Pa / i.E0MeanPa;               // G0,05 = Gmean E0,05 / E0,mean (common practice)
-            o.SigmaMCritPa = i.UseSoftwoodLtbFormula
-                ? 0.78 * i.BM * i.BM * i.E005Pa / (i.HM * i.LefLtbM)                                   // (6.32)
-                : Math.PI * Math.Sqrt(i.E005Pa * i.IzM4 * o.G005Pa * i.TorsionM4) / (i.LefLtbM * i.WyM3); // (6.31)
+            if (i.UseSoftwoodLtbFormula)
+                o.SigmaMCritPa = 0.78 * i.BM * i.BM * i.E005Pa / (i.HM * i.LefLtbM);                     // (6.32)
+            else
+            {
+                o.G005Pa = i.GMeanPa * i.E005Pa / i.E0MeanPa;           // G0,05 = Gmean E0,05 / E0,mean (common practice)
+                o.SigmaMCritPa = Math.PI * Math.Sqrt(i.E005Pa * i.IzM4 * o.G005Pa * i.TorsionM4) / (i.LefLtbM * i.WyM3); // (6.31)
+            }
             o.LambdaRelM = Math.Sqrt(i.FmkPa / o.SigmaMCritPa);       // (6.30)
             o.KCrit = KCrit(o.LambdaRelM);                           // (6.34)
             double m = o.SigmaMyPa / (o.KCrit * o.FmydPa);

@@ -42,6 +42,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     private const string NdsRef = "NDS 2018";
     private readonly double? _cd;
     private readonly double? _lambda;
+    private readonly double _fcFactors, _eminFactors, _fbFactors;
 
     /// <summary>Creates the method.</summary>
     /// <param name="format">ASD or LRFD.</param>
@@ -70,6 +71,12 @@ public sealed class NdsColumnStability : IResistanceMethod
         _cd = loadDurationFactor;
         _lambda = timeEffectFactor;
         AllowsConstructionSlenderness = allowConstructionSlenderness;
+        // The products of the use factors and the LRFD format factors, formed once here rather than in every check.
+        var adj = Adjustments;
+        bool asdFormat = format == NdsDesignFormat.Asd;
+        _fcFactors = adj.WetServiceFc * adj.TemperatureFc * adj.SizeFc * adj.IncisingFc * (asdFormat ? 1 : 2.40) * (asdFormat ? 1 : 0.90);
+        _eminFactors = adj.WetServiceEmin * adj.TemperatureEmin * adj.IncisingEmin * (asdFormat ? 1 : 1.76) * (asdFormat ? 1 : 0.85);
+        _fbFactors = adj.WetServiceFb * adj.TemperatureFb * adj.SizeFb * adj.IncisingFb * adj.Repetitive * (asdFormat ? 1 : 2.54) * (asdFormat ? 1 : 0.85);
         Identity = new MethodIdentity(format == NdsDesignFormat.Asd ? Name + " (ASD)" : Name + " (LRFD)", "ANSI/AWC NDS", "2018", "3.7.1, 3.9.2, 15.4.1, 3.3.3, Table 4.3.1",
             Settings(format, Adjustments, loadDurationFactor, timeEffectFactor, allowConstructionSlenderness));
     }
@@ -265,9 +272,8 @@ public sealed class NdsColumnStability : IResistanceMethod
         double phiC = asd ? 1 : 0.90, phiB = asd ? 1 : 0.85, phiS = asd ? 1 : 0.85;
 
         double fcRef = member.StrengthPa, fbRef = mat.FbPa, eminRef = member.ElasticModulusPa;
-        double fcStar = fcRef * cd * adj.WetServiceFc * adj.TemperatureFc * adj.SizeFc * adj.IncisingFc * kfC * phiC * lam;
-        double eminP = eminRef * adj.WetServiceEmin * adj.TemperatureEmin * adj.IncisingEmin * kfE * phiS;
-        double fbStar = fbRef * cd * adj.WetServiceFb * adj.TemperatureFb * adj.SizeFb * adj.IncisingFb * adj.Repetitive * kfB * phiB * lam;
+        double fcStar = fcRef * cd * _fcFactors * lam;     // Fc CD CM Ct CF Ci (KF φc λ)
+        double eminP = eminRef * _eminFactors;             // Emin CM Ct Ci (KF φs)
 
         Slenderness(member, out double d1, out double d2, out double r1, out double r2);
         bool govY = r1 >= r2;
@@ -289,6 +295,7 @@ public sealed class NdsColumnStability : IResistanceMethod
             fb1 = m1 / TimberRules.ModulusY(member); fb2 = m2 / TimberRules.ModulusZ(member);
         }
         bool bending = fb1 > 0 || fb2 > 0;
+        double fbStar = bending ? fbRef * cd * _fbFactors * lam : double.NaN;   // Fb CD CM Ct CF Ci Cr (KF φb λ), bending only
 
         bool ltb = false;
         double le = double.NaN, rb = double.NaN, fbE = double.PositiveInfinity, cl = 1.0;
