@@ -71,12 +71,18 @@ public sealed class SizeSelector
     {
         ArgumentNullException.ThrowIfNull(request);
         var run = new Run(this, request);
-        var found = run.Pruned();
+        SizingCandidate[]? found;
+        try { found = run.Pruned(); }
+        finally { run.Release(); }
         if (found is null)
         {
             var again = new Run(this, request) { Evaluations = run.Evaluations };
-            var all = again.Exhaustive();
-            return new SizeSelection(request, all, again.Evaluations, again.NotApplicableCount, true, Objective.Name, again.MethodFailures, again.FirstFailure);
+            try
+            {
+                var all = again.Exhaustive();
+                return new SizeSelection(request, all, again.Evaluations, again.NotApplicableCount, true, Objective.Name, again.MethodFailures, again.FirstFailure);
+            }
+            finally { again.Release(); }
         }
         return new SizeSelection(request, found, run.Evaluations, run.NotApplicableCount, false, Objective.Name, run.MethodFailures, run.FirstFailure);
     }
@@ -89,8 +95,12 @@ public sealed class SizeSelector
     {
         ArgumentNullException.ThrowIfNull(request);
         var run = new Run(this, request);
-        var all = run.Exhaustive();
-        return new SizeSelection(request, all, run.Evaluations, run.NotApplicableCount, false, Objective.Name, run.MethodFailures, run.FirstFailure);
+        try
+        {
+            var all = run.Exhaustive();
+            return new SizeSelection(request, all, run.Evaluations, run.NotApplicableCount, false, Objective.Name, run.MethodFailures, run.FirstFailure);
+        }
+        finally { run.Release(); }
     }
 
     /// <summary>Sizes many members across cores (pruned search), results in input order.</summary>
@@ -186,8 +196,36 @@ public sealed class SizeSelector
             _plan = s.PlanFor(request.Member.Material);
             _cases = new ResolvedActions[request.Cases.Count];
             for (int i = 0; i < _cases.Length; i++) _cases[i] = ResolvedActions.From(request.Cases[i]);
-            _state = new sbyte[s.Catalogue.Count];
-            _verified = new SizingCandidate?[s.Catalogue.Count];
+            // The per-entry state lives in arrays kept per thread and cleared for each search, so that sizing thousands of
+            // members does not allocate (and collect) two catalogue-sized arrays per member; a search nested in another on
+            // the same thread (a method that sizes something itself) gets arrays of its own.
+            int n = s.Catalogue.Count;
+            if (t_inUse || t_state is null || t_state.Length < n)
+            {
+                _state = new sbyte[n];
+                _verified = new SizingCandidate?[n];
+                if (!t_inUse) { t_state = _state; t_verified = _verified; }
+            }
+            else
+            {
+                _state = t_state;
+                _verified = t_verified!;
+                Array.Clear(_state, 0, n);
+                Array.Clear(_verified, 0, n);
+            }
+            _ownsScratch = !t_inUse && ReferenceEquals(_state, t_state);
+            if (_ownsScratch) t_inUse = true;
+        }
+
+        [ThreadStatic] private static sbyte[]? t_state;
+        [ThreadStatic] private static SizingCandidate?[]? t_verified;
+        [ThreadStatic] private static bool t_inUse;
+        private readonly bool _ownsScratch;
+
+        /// <summary>Hands the per-thread arrays back for the next search on this thread.</summary>
+        internal void Release()
+        {
+            if (_ownsScratch) t_inUse = false;
         }
 
         private bool Less(int a, int b) => _plan.Key[a] < _plan.Key[b] || (_plan.Key[a] == _plan.Key[b] && a < b);
