@@ -59,6 +59,17 @@ public class BreakdownBenchmarks
         return s;
     }
 
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static double ViaCheck(Member[] ms, DesignActions a, IResistanceMethod m)
+    {
+        double s = 0;
+        for (int i = 0; i < ms.Length; i++) { var r = Check.Evaluate(ms[i], a, m); s += r.Utilisation + r.DesignResistanceN; }
+        return s;
+    }
+
+    [Benchmark] public double Ec9Check() => ViaCheck(_tube, _alu, ResistanceMethods.Eurocode9);
+    [Benchmark] public double NdsCheck() => ViaCheck(_dfl, _timber, ResistanceMethods.NdsColumnAsd);
+    [Benchmark] public double FireCheck() => ViaCheck(_c24, _timber, ResistanceMethods.Ec5FireR30);
     [Benchmark] public double Ec9AppliesTo() => Applies(_tube, _alu, ResistanceMethods.Eurocode9);
     [Benchmark] public double Ec9Evaluate() => Evaluate(_tube, _alu, ResistanceMethods.Eurocode9);
     [Benchmark] public double NdsAppliesTo() => Applies(_dfl, _timber, ResistanceMethods.NdsColumnAsd);

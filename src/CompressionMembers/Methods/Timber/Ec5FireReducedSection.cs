@@ -128,7 +128,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     /// <summary>Effective charring depth def = βn t + k0 d0 (4.1).</summary>
     internal static double EffectiveDepth(double tS, double betaNMs) => betaNMs * tS + K0(tS) * D0M;
 
-    private double BetaN(TimberMaterial m) => _betaNMs ?? En1995Factors.CharringRateMmPerMin(m.Product, m.RhokKgM3, true) / 60000.0;
+    // βn of Table 3.1 was read once with the material (the same operations); AppliesTo refused a material it does not cover.
+    private double BetaN(TimberMaterial m) => _betaNMs ?? m.NotionalCharringRateMs;
 
     private double Kfi(TimberMaterial m) => _kfi ?? En1995Factors.KfiUnchecked(m.Product);
 
