@@ -1,5 +1,6 @@
 using System.Collections.Generic;
 using System.Globalization;
+using CompressionMembers.Materials.Timber;
 using CompressionMembers.Sections;
 using UnitsNet;
 
@@ -17,11 +18,12 @@ public static class SectionCatalogues
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    /// <summary>Metric sawn softwood, width × depth in mm: widths 38, 45, 63, 75, 100 with depths 75 to 300
-    /// (common practice, from memory). Family "sawn b" for each width b, so pruning climbs the depths.</summary>
+    /// <summary>Metric sawn softwood, width × depth in mm: the thicknesses of <see cref="TimberSizes.MetricSawnThicknesses"/> up
+    /// to 100 mm with the widths of <see cref="TimberSizes.MetricSawnWidths"/> as depths (EN 336 sizes, common practice, from
+    /// memory; the one table of the library). Family "sawn b" for each width b, so pruning climbs the depths.</summary>
     public static SectionCatalogue MetricSawnTimber { get; } = Build("metric sawn timber", "common practice sizes (from memory)", SawnEntries());
 
-    /// <summary>Glued laminated timber, width × depth in mm: widths 90, 115, 140, 165, 190, 215 and depths in 45 mm
+    /// <summary>Glued laminated timber, width × depth in mm: the widths of <see cref="TimberSizes.GlulamWidths"/> and depths in 45 mm
     /// laminations from 180 to 900 (common practice, from memory). Family "glulam b".</summary>
     public static SectionCatalogue Glulam { get; } = Build("glulam", "common practice sizes, 45 mm laminations (from memory)", GlulamEntries());
 
@@ -44,22 +46,23 @@ public static class SectionCatalogues
     private static List<CatalogueEntry> SawnEntries()
     {
         var list = new List<CatalogueEntry>();
-        double[] widths = [38, 45, 63, 75, 100];
-        double[] depths = [75, 100, 125, 150, 175, 200, 225, 250, 300];
-        foreach (var b in widths)
-            foreach (var h in depths)
-                if (h >= b) list.Add(new CatalogueEntry($"sawn {N(b)}x{N(h)}", new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h)), $"sawn {N(b)}"));
+        // One table of sizes for the library: TimberSizes (thicknesses up to 100 mm as widths here, its widths as depths).
+        foreach (var bl in TimberSizes.MetricSawnThicknesses)
+            foreach (var hl in TimberSizes.MetricSawnWidths)
+            {
+                double b = bl.Millimeters, h = hl.Millimeters;
+                if (b <= 100 && h >= b) list.Add(new CatalogueEntry($"sawn {N(b)}x{N(h)}", new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h)), $"sawn {N(b)}"));
+            }
         return list;
     }
 
     private static List<CatalogueEntry> GlulamEntries()
     {
         var list = new List<CatalogueEntry>();
-        double[] widths = [90, 115, 140, 165, 190, 215];
-        foreach (var b in widths)
+        foreach (var bl in TimberSizes.GlulamWidths)
             for (int n = 4; n <= 20; n++)
             {
-                double h = 45 * n;
+                double b = bl.Millimeters, h = 45 * n;
                 list.Add(new CatalogueEntry($"glulam {N(b)}x{N(h)}", new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h)), $"glulam {N(b)}"));
             }
         return list;
@@ -67,13 +70,13 @@ public static class SectionCatalogues
 
     private static List<CatalogueEntry> UsEntries()
     {
-        // nominal → dressed, in inches (common practice, from memory).
-        (int Nominal, double Dressed)[] sizes = [(2, 1.5), (4, 3.5), (6, 5.5), (8, 7.25), (10, 9.25), (12, 11.25)];
+        // Nominal → dressed by TimberSizes.UsDressedSize (PS 20 / NDS Supplement Table 1A, from memory): one table.
+        int[] nominal = [2, 4, 6, 8, 10, 12];
         var list = new List<CatalogueEntry>();
-        foreach (var (nb, b) in sizes[..3])
-            foreach (var (nh, h) in sizes)
+        foreach (int nb in nominal[..3])
+            foreach (int nh in nominal)
                 if (nh >= nb && nh >= 4)
-                    list.Add(new CatalogueEntry($"{nb}x{nh}", new RectangleSection(Length.FromInches(b), Length.FromInches(h)), $"US {nb}x"));
+                    list.Add(new CatalogueEntry($"{nb}x{nh}", new RectangleSection(TimberSizes.UsDressedSize(nb, false), TimberSizes.UsDressedSize(nh, false)), $"US {nb}x"));
         return list;
     }
 
