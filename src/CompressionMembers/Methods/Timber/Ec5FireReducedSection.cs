@@ -319,6 +319,10 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
             trace.Add("A,fi", "residual area", "b,fi h,fi", i.AreaM2, StepUnit.Area, ResRef);
             trace.Add("Iy,fi", "residual second moment about y", "b,fi h,fi³ / 12", i.IyM4, StepUnit.SecondMoment, ResRef);
             trace.Add("Iz,fi", "residual second moment about z", "h,fi b,fi³ / 12", i.IzM4, StepUnit.SecondMoment, ResRef);
+            // The slenderness below is of the residual section; its radii of gyration are printed so that a checker sees
+            // that the gross iy, iz listed above are not the ones used.
+            trace.Add("iy,fi", "residual radius of gyration about y", "√(Iy,fi / A,fi)", Math.Sqrt(i.IyM4 / i.AreaM2), StepUnit.Length, ResRef);
+            trace.Add("iz,fi", "residual radius of gyration about z", "√(Iz,fi / A,fi)", Math.Sqrt(i.IzM4 / i.AreaM2), StepUnit.Length, ResRef);
             trace.Note("The EN 1995-1-1 checks follow on the residual section with fire design values (no kh increase).", "EN 1995-1-2 4.2.2(2)");
             Ec5Trace.Write(trace, i, o, ",fi");
         }

@@ -13,8 +13,8 @@ internal static class Ec5Trace
     {
         t.Add("Lef,y", "effective length about y", "Lcr,y", i.LefYM, StepUnit.Length, "restraint");
         t.Add("Lef,z", "effective length about z", "Lcr,z", i.LefZM, StepUnit.Length, "restraint");
-        t.Add("λy", "slenderness ratio about y", "Lef,y / iy", o.LambdaY, StepUnit.None, S21);
-        t.Add("λz", "slenderness ratio about z", "Lef,z / iz", o.LambdaZ, StepUnit.None, S22);
+        t.Add("λy", "slenderness ratio about y", "Lef,y / iy" + fi, o.LambdaY, StepUnit.None, S21);
+        t.Add("λz", "slenderness ratio about z", "Lef,z / iz" + fi, o.LambdaZ, StepUnit.None, S22);
         t.Add("λrel,y", "relative slenderness about y", "λy / π × √(fc,0,k / E0,05)", o.LambdaRelY, StepUnit.None, S21);
         t.Add("λrel,z", "relative slenderness about z", "λz / π × √(fc,0,k / E0,05)", o.LambdaRelZ, StepUnit.None, S22);
         t.Add("βc", "straightness factor", "0.2 solid timber, 0.1 glulam and LVL", i.BetaC, StepUnit.None, En1995Factors.BetaCRef);
