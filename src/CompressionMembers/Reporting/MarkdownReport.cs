@@ -13,10 +13,18 @@ public static class MarkdownReport
     /// <param name="result">The result (with steps when it was traced).</param>
     /// <returns>The Markdown text.</returns>
     /// <exception cref="ArgumentException">The result is <c>default</c>.</exception>
-    public static string Render(in CheckResult result)
+    public static string Render(in CheckResult result) => Render(result, ReportUnits.Metric);
+
+    /// <summary>Renders one result with its calculated values in a chosen set of display units.</summary>
+    /// <param name="result">The result (with steps when it was traced).</param>
+    /// <param name="units">The display units (US customary for NDS and US aluminium practice).</param>
+    /// <returns>The Markdown text.</returns>
+    /// <exception cref="ArgumentException">The result is <c>default</c>.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The display units are undefined.</exception>
+    public static string Render(in CheckResult result, ReportUnits units)
     {
         if (result.Member is null) throw new ArgumentException("The result is default (no member).", nameof(result));
-        var c = ReportContent.From(result);
+        var c = ReportContent.From(result, units);
         var sb = new StringBuilder(4096);
         sb.Append("# ").Append(Esc(c.Title)).Append("\n\n");
         foreach (var (k, v) in c.Header) sb.Append("- **").Append(Esc(k)).Append("**: ").Append(Esc(v)).Append('\n');
@@ -41,7 +49,7 @@ public static class MarkdownReport
                     continue;
                 }
                 n++;
-                sb.Append("| ").Append(n).Append(" | ").Append(Esc(st.Symbol)).Append(" | ").Append(Esc(NumberFormat.Quantity(st.Value, st.Unit)))
+                sb.Append("| ").Append(n).Append(" | ").Append(Esc(st.Symbol)).Append(" | ").Append(Esc(NumberFormat.Quantity(st.Value, st.Unit, c.Units)))
                   .Append(" | ").Append(Esc(st.Meaning)).Append(" | ").Append(Esc(st.Expression)).Append(" | ").Append(Esc(st.Reference)).Append(" |\n");
             }
         }

@@ -43,12 +43,44 @@ public static class NumberFormat
     /// <param name="siValue">The value in SI.</param>
     /// <param name="unit">Its kind.</param>
     /// <returns>Number and unit, such as "245.7 kN".</returns>
-    public static string Quantity(double siValue, StepUnit unit) => unit switch
+    public static string Quantity(double siValue, StepUnit unit) => Quantity(siValue, unit, ReportUnits.Metric);
+
+    /// <summary>A value stored in SI, in a chosen set of display units.</summary>
+    /// <param name="siValue">The value in SI.</param>
+    /// <param name="unit">Its kind.</param>
+    /// <param name="units">The display units.</param>
+    /// <returns>Number and unit, such as "245.7 kN" or "1 350 psi".</returns>
+    /// <exception cref="System.ArgumentOutOfRangeException">The display units are undefined.</exception>
+    public static string Quantity(double siValue, StepUnit unit, ReportUnits units) => unit switch
     {
         StepUnit.None => Number(Chop(siValue)),
         StepUnit.Boolean => siValue != 0 ? "yes" : "no",
-        _ => Number(Chop(siValue * Scale(unit))) + " " + UnitText(unit),
+        _ => Number(Chop(Display(siValue, unit, units))) + " " + UnitText(unit, units),
     };
+
+    // Exact definitions: 1 in = 0.0254 m, 1 lb (force) = 4.4482216152605 N, 1 lb (mass) = 0.45359237 kg, 1 ft = 0.3048 m.
+    private const double Inch = 0.0254, PoundForce = 4.4482216152605;
+
+    /// <summary>An SI value in the display unit of its kind.</summary>
+    internal static double Display(double siValue, StepUnit unit, ReportUnits units)
+    {
+        if (units == ReportUnits.Metric) return siValue * Scale(unit);
+        if (units != ReportUnits.UsCustomary) throw new System.ArgumentOutOfRangeException(nameof(units), units, $"Unknown report units {(int)units}.");
+        return unit switch
+        {
+            StepUnit.Length => siValue / Inch,
+            StepUnit.Area => siValue / (Inch * Inch),
+            StepUnit.SecondMoment => siValue / (Inch * Inch * Inch * Inch),
+            StepUnit.SectionModulus => siValue / (Inch * Inch * Inch),
+            StepUnit.WarpingConstant => siValue / (Inch * Inch * Inch * Inch * Inch * Inch),
+            StepUnit.Force => siValue / PoundForce,
+            StepUnit.Stress => siValue / (PoundForce / (Inch * Inch)),
+            StepUnit.Moment => siValue / (PoundForce * 0.3048),
+            StepUnit.CharringRate => siValue * 60 / Inch,
+            StepUnit.Density => siValue / (0.45359237 / (0.3048 * 0.3048 * 0.3048)),
+            _ => siValue * Scale(unit),
+        };
+    }
 
     // A display value below 1e-9 (in mm, kN, MPa …) is rounding noise of a quantity that is zero by symmetry,
     // such as the shear-centre offset of an equal angle across its axis of symmetry: show it as 0.
@@ -74,7 +106,28 @@ public static class NumberFormat
     /// <summary>The display unit's symbol.</summary>
     /// <param name="unit">The kind of quantity.</param>
     /// <returns>The symbol, empty for a number.</returns>
-    public static string UnitText(StepUnit unit) => unit switch
+    public static string UnitText(StepUnit unit) => UnitText(unit, ReportUnits.Metric);
+
+    /// <summary>The symbol of a kind of quantity's display unit in a chosen set of units.</summary>
+    /// <param name="unit">The kind of quantity.</param>
+    /// <param name="units">The display units.</param>
+    /// <returns>The symbol, empty for a number.</returns>
+    public static string UnitText(StepUnit unit, ReportUnits units) => units != ReportUnits.UsCustomary ? MetricText(unit) : unit switch
+    {
+        StepUnit.Length => "in",
+        StepUnit.Area => "in²",
+        StepUnit.SecondMoment => "in⁴",
+        StepUnit.SectionModulus => "in³",
+        StepUnit.WarpingConstant => "in⁶",
+        StepUnit.Force => "lb",
+        StepUnit.Stress => "psi",
+        StepUnit.Moment => "lb·ft",
+        StepUnit.CharringRate => "in/min",
+        StepUnit.Density => "lb/ft³",
+        _ => MetricText(unit),
+    };
+
+    private static string MetricText(StepUnit unit) => unit switch
     {
         StepUnit.Length => "mm",
         StepUnit.Area => "mm²",

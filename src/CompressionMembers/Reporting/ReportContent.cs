@@ -16,10 +16,13 @@ internal sealed class ReportContent
     internal List<string[]> AxisRows = [];
     internal List<(string Key, string Value)> Outcome = [];
     internal string Verdict = "";
+    internal ReportUnits Units;
 
-    internal static ReportContent From(in CheckResult r)
+    internal static ReportContent From(in CheckResult r, ReportUnits units = ReportUnits.Metric)
     {
-        var c = new ReportContent();
+        if (units is not (ReportUnits.Metric or ReportUnits.UsCustomary))
+            throw new System.ArgumentOutOfRangeException(nameof(units), units, $"Unknown report units {(int)units}.");
+        var c = new ReportContent { Units = units };
         var m = r.Member;
         var a = r.Actions;
         var id = r.Method.Identity;
@@ -29,6 +32,8 @@ internal sealed class ReportContent
         if (id.Standard.Length > 0)
             c.Header.Add(("source", id.Standard + (id.Edition.Length > 0 ? " " + id.Edition : "") + (id.Clause.Length > 0 ? ", " + id.Clause : "")));
         c.Header.Add(("input fingerprint", InputFingerprint.Compute(m, a, r.Method)));
+        if (units == ReportUnits.UsCustomary)
+            c.Header.Add(("display units", "US customary (in, lb, psi, lb·ft); inputs as given; calculated in SI"));
 
         var mat = m.Material;
         c.Inputs.Add(("material", $"{mat.Name} ({mat.Kind.ToString().ToLowerInvariant()}); values from {mat.Source}"));
@@ -38,10 +43,10 @@ internal sealed class ReportContent
         c.Inputs.Add(("ρ", Si.Given(mat.Density)));
         var s = m.Section;
         c.Inputs.Add(("section", s.Designation));
-        c.Inputs.Add(("A", NumberFormat.Quantity(s.Props.AreaM2, StepUnit.Area)));
-        c.Inputs.Add(("Iy, Iz", NumberFormat.Quantity(s.Props.IyM4, StepUnit.SecondMoment) + ", " + NumberFormat.Quantity(s.Props.IzM4, StepUnit.SecondMoment)));
+        c.Inputs.Add(("A", NumberFormat.Quantity(s.Props.AreaM2, StepUnit.Area, units)));
+        c.Inputs.Add(("Iy, Iz", NumberFormat.Quantity(s.Props.IyM4, StepUnit.SecondMoment, units) + ", " + NumberFormat.Quantity(s.Props.IzM4, StepUnit.SecondMoment, units)));
         if (s.Props.PrincipalAngleRad != 0)
-            c.Inputs.Add(("principal axes", $"turned {NumberFormat.Quantity(s.Props.PrincipalAngleRad, StepUnit.Angle)} from the reference axes; y is the major (u–u), z the minor (v–v) principal axis"));
+            c.Inputs.Add(("principal axes", $"turned {NumberFormat.Quantity(s.Props.PrincipalAngleRad, StepUnit.Angle, units)} from the reference axes; y is the major (u–u), z the minor (v–v) principal axis"));
         c.Inputs.Add(("length L", Si.Given(m.Length)));
         c.Inputs.Add(("restraint about y", m.Restraint.AboutY.ToString()));
         c.Inputs.Add(("restraint about z", m.Restraint.AboutZ.ToString()));
@@ -59,7 +64,7 @@ internal sealed class ReportContent
         if (a.LoadDuration != Actions.LoadDurationClass.Unspecified) c.Inputs.Add(("load duration", Words.Duration(a.LoadDuration)));
 
         foreach (var st in id.Settings)
-            c.Settings.Add((st.Symbol, NumberFormat.Quantity(st.Value, st.Unit) + "  " +
+            c.Settings.Add((st.Symbol, NumberFormat.Quantity(st.Value, st.Unit, units) + "  " +
                 (st.IsRecommendedValue ? "[recommended value] " : "[set by the user] ") + st.Meaning + (st.Note.Length > 0 ? "; " + st.Note : "")));
 
         c.Traced = r.IsTraced;
@@ -70,8 +75,8 @@ internal sealed class ReportContent
         AddAxis(c, "twist", r.Torsional);
 
         c.Outcome.Add(("governing", Words.Mode(r.GoverningMode, r.GoverningAxis) + (r.GoverningCheck.Length > 0 ? " — " + r.GoverningCheck : "")));
-        c.Outcome.Add(("NRd", NumberFormat.Quantity(r.DesignResistanceN, StepUnit.Force) + " (resistance of the governing check)"));
-        c.Outcome.Add(("NEd", NumberFormat.Quantity(a.AxialCompression.Newtons, StepUnit.Force)));
+        c.Outcome.Add(("NRd", NumberFormat.Quantity(r.DesignResistanceN, StepUnit.Force, units) + " (resistance of the governing check)"));
+        c.Outcome.Add(("NEd", NumberFormat.Quantity(a.AxialCompression.Newtons, StepUnit.Force, units)));
         c.Outcome.Add(("utilisation", NumberFormat.Number(r.Utilisation)));
         if (s.IsThinWalledOpen && !r.Torsional.IsEvaluated && s.Kind != Sections.SectionKind.DoublySymmetricI)
             c.Outcome.Add(("not checked", "torsional and flexural-torsional buckling: this section is open and thin-walled, and they can govern; use a method that checks them"));
@@ -86,12 +91,12 @@ internal sealed class ReportContent
         if (!o.IsEvaluated) return;
         c.AxisRows.Add([
             name,
-            NumberFormat.Quantity(o.EffectiveLengthM, StepUnit.Length),
+            NumberFormat.Quantity(o.EffectiveLengthM, StepUnit.Length, c.Units),
             NumberFormat.Number(o.Slenderness),
             NumberFormat.Number(o.RelativeSlenderness),
-            NumberFormat.Quantity(o.CriticalForceN, StepUnit.Force),
+            NumberFormat.Quantity(o.CriticalForceN, StepUnit.Force, c.Units),
             NumberFormat.Number(o.ReductionFactor),
-            NumberFormat.Quantity(o.ResistanceN, StepUnit.Force),
+            NumberFormat.Quantity(o.ResistanceN, StepUnit.Force, c.Units),
         ]);
     }
 

@@ -17,10 +17,18 @@ public static class TextReport
     /// <param name="result">The result (with steps when it was traced).</param>
     /// <returns>The report.</returns>
     /// <exception cref="ArgumentException">The result is <c>default</c>.</exception>
-    public static string Render(in CheckResult result)
+    public static string Render(in CheckResult result) => Render(result, ReportUnits.Metric);
+
+    /// <summary>Renders one result with its calculated values in a chosen set of display units.</summary>
+    /// <param name="result">The result (with steps when it was traced).</param>
+    /// <param name="units">The display units (US customary for NDS and US aluminium practice).</param>
+    /// <returns>The report.</returns>
+    /// <exception cref="ArgumentException">The result is <c>default</c>.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">The display units are undefined.</exception>
+    public static string Render(in CheckResult result, ReportUnits units)
     {
         if (result.Member is null) throw new ArgumentException("The result is default (no member).", nameof(result));
-        var c = ReportContent.From(result);
+        var c = ReportContent.From(result, units);
         var sb = new StringBuilder(4096);
         Line(sb, c.Title);
         Line(sb, new string('=', Math.Min(Width, c.Title.Length)));
@@ -44,7 +52,7 @@ public static class TextReport
                 continue;
             }
             n++;
-            string head = $"  {n,3}. {st.Symbol} = {NumberFormat.Quantity(st.Value, st.Unit)}";
+            string head = $"  {n,3}. {st.Symbol} = {NumberFormat.Quantity(st.Value, st.Unit, c.Units)}";
             Line(sb, head.Length < 44 ? head.PadRight(44) + st.Meaning : head + "  " + st.Meaning);
             string expr = st.Expression.Length > 0 ? "       from " + st.Expression : "";
             string refText = st.Reference.Length > 0 ? "[" + st.Reference + "]" : "";

@@ -12,6 +12,8 @@ public class TimberReportSnapshotTests
     [Fact] public void Text_Ec5LateralTorsional() => Approvals.Verify(TextReport.Render(TimberReportCases.Ec5LateralTorsional()));
     [Fact] public void Text_Ec5NationalAnnexGammaM() => Approvals.Verify(TextReport.Render(TimberReportCases.Ec5NationalAnnex()));
     [Fact] public void Text_NdsAsdCompression() => Approvals.Verify(TextReport.Render(TimberReportCases.NdsAsdCompression()));
+    [Fact] public void Text_NdsAsdCompressionInUsUnits() => Approvals.Verify(TextReport.Render(TimberReportCases.NdsAsdCompression(), ReportUnits.UsCustomary));
+    [Fact] public void Markdown_NdsLrfdBiaxialInUsUnits() => Approvals.Verify(MarkdownReport.Render(TimberReportCases.NdsLrfdBiaxial(), ReportUnits.UsCustomary));
     [Fact] public void Text_NdsLrfdBiaxial() => Approvals.Verify(TextReport.Render(TimberReportCases.NdsLrfdBiaxial()));
     [Fact] public void Text_FireR60() => Approvals.Verify(TextReport.Render(TimberReportCases.FireR60()));
     [Fact] public void Text_FireThreeSidesBending() => Approvals.Verify(TextReport.Render(TimberReportCases.FireThreeSidesBending()));
