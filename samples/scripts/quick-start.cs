@@ -22,4 +22,4 @@ var prop = Member.Create(
 var result = Check.EvaluateWithTrace(prop, DesignActions.Compression(Force.FromKilonewtons(62)), ResistanceMethods.Johnson);
 
 Console.WriteLine($"{result.DesignResistance.Kilonewtons:0.0} kN, utilisation {result.Utilisation:0.000}, passes: {result.Passed}");
-Console.WriteLine(TextReport.Render(result));   // or MarkdownReport.Render(result)
+Console.WriteLine(TextReport.Render(result));   // or MarkdownReport.Render(result); add ReportUnits.UsCustomary for in, lb, psi
