@@ -1,4 +1,5 @@
 using System;
+using System.Threading;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials;
 using CompressionMembers.Resolution;
@@ -33,6 +34,25 @@ public sealed class Member
     }
 
     private readonly ResolvedMember _resolved;
+
+    // The EN 1995-1-1 size factors kh for bending about y (depth h) and z (width b): constants of the member's section and
+    // material that cost two powers, so the timber method computes them on first use and keeps them here (NaN: not yet).
+    // Stored as the double's bits through Volatile so that a read never sees half a value on any platform; two threads
+    // that race compute the same bits, so either write is right.
+    private long _sizeFactorYBits = NotYet, _sizeFactorZBits = NotYet;
+    private static readonly long NotYet = BitConverter.DoubleToInt64Bits(double.NaN);
+
+    /// <summary>The size factor kh about y (depth) or z (width) computed by <paramref name="compute"/> on first use and
+    /// kept with the member (it depends only on the section and the material, which a member never changes).</summary>
+    internal double SizeFactor(bool aboutY, Func<Member, bool, double> compute)
+    {
+        ref long slot = ref aboutY ? ref _sizeFactorYBits : ref _sizeFactorZBits;
+        long bits = Volatile.Read(ref slot);
+        if (bits != NotYet) return BitConverter.Int64BitsToDouble(bits);
+        double kh = compute(this, aboutY);
+        Volatile.Write(ref slot, BitConverter.DoubleToInt64Bits(kh));
+        return kh;
+    }
 
     /// <summary>The member in SI doubles, resolved once at construction (read by reference: no copy per check).</summary>
     internal ref readonly ResolvedMember Resolved => ref _resolved;

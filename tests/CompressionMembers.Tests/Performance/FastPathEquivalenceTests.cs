@@ -169,4 +169,35 @@ public class FastPathEquivalenceTests
         var r = Check.Evaluate(member, DesignActions.Compression(Force.FromKilonewtons(1)), new BrokenMethod(0, double.PositiveInfinity));
         Assert.False(r.Passed);
     }
+    // kh is kept with the member after its first bending check (Member.SizeFactor): the kept value must be the formula's to
+    // the bit, for every product and depth (below and above the 150, 300 and 600 mm limits of EN 1995-1-1 3.2–3.4), and a
+    // member checked first on many threads at once must give every thread the same result as a fresh member on one thread.
+    [Fact]
+    public void Ec5SizeFactor_KeptWithTheMember_SameBitsAsTheFormulaAndAcrossThreads()
+    {
+        TimberMaterial[] materials = [TimberGrades.C16, TimberGrades.C24, TimberGrades.D40, TimberGrades.GL24h, TimberGrades.GL32h];
+        var actions = DesignActions.Compression(Force.FromKilonewtons(20)).WithLoadDuration(LoadDurationClass.MediumTerm)
+            .WithEccentricity(Length.FromMillimeters(15), Length.FromMillimeters(8));
+        Gen.Select(Gen.Double[20, 700], Gen.Double[20, 700], Gen.Int[0, materials.Length - 1]).Sample((b, h, mi) =>
+        {
+            var mat = materials[mi];
+            var member = Member.Create(new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h)), mat, Length.FromMeters(3), Restraint.PinnedBothAxes);
+            // The depths as the method reads them (the resolved fibre distances), as the uncached path did.
+            TimberRules.Dimensions(member.Resolved, out double bM, out double hM);
+            double khY = Ec5ColumnStability.SizeFactor(mat, true, hM), khZ = Ec5ColumnStability.SizeFactor(mat, true, bM);
+            var fresh = Check.Evaluate(Member.Create(member.Section, mat, member.Length, member.Restraint), actions, ResistanceMethods.Ec5Column);
+            var results = new CheckResult[8];
+            System.Threading.Tasks.Parallel.For(0, results.Length, new System.Threading.Tasks.ParallelOptions { MaxDegreeOfParallelism = 8 },
+                k => results[k] = Check.Evaluate(member, actions, ResistanceMethods.Ec5Column));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(khY), BitConverter.DoubleToInt64Bits(member.SizeFactor(true, static (_, _) => double.NaN)));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(khZ), BitConverter.DoubleToInt64Bits(member.SizeFactor(false, static (_, _) => double.NaN)));
+            foreach (var r in results)
+            {
+                Assert.Equal(BitConverter.DoubleToInt64Bits(fresh.Utilisation), BitConverter.DoubleToInt64Bits(r.Utilisation));
+                Assert.Equal(fresh.GoverningCheck, r.GoverningCheck);
+            }
+            var again = Check.EvaluateWithTrace(member, actions, ResistanceMethods.Ec5Column);
+            Assert.Equal(BitConverter.DoubleToInt64Bits(fresh.Utilisation), BitConverter.DoubleToInt64Bits(again.Utilisation));
+        }, iter: 200, seed: Trust.PropertyTests.Seed, threads: 1);
+    }
 }

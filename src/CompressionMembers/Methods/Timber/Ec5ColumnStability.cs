@@ -3,6 +3,7 @@ using System.Collections.Generic;
 using System.Runtime.CompilerServices;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials.Timber;
+using CompressionMembers.Members;
 using CompressionMembers.Methods.Common;
 using CompressionMembers.Resolution;
 using CompressionMembers.Results;
@@ -130,6 +131,14 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         }
     }
 
+    // kh of a member about y (on its depth h) or z (on its width b): the same operations as SizeFactor on Geometry's values.
+    private static readonly Func<Member, bool, double> MemberSizeFactor = static (m, aboutY) =>
+    {
+        ref readonly var r = ref m.Resolved;
+        TimberRules.Dimensions(r, out double b, out double h);
+        return SizeFactor((TimberMaterial)m.Material, r.SectionKind == SectionKind.SolidRectangle, aboutY ? h : b);
+    };
+
     /// <summary>The rule <see cref="SizeFactor"/> applied, in words for the trace (the same branches).</summary>
     internal static string SizeFactorRule(TimberMaterial m, bool rectangular, double depthM, string dim)
     {
@@ -244,8 +253,9 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         if (i.MyEdNm != 0 || i.MzEdNm != 0)   // kh only matters with bending (and costs two powers)
         {
             // Without the size factor, increases are skipped but a reduction (LVL deeper than 300 mm) still applies.
-            i.KhY = SizeFactor(mat, i.Rectangular, i.HM);
-            i.KhZ = SizeFactor(mat, i.Rectangular, i.BM);
+            // kh depends only on the member's section and material: computed on the member's first bending check, then kept.
+            i.KhY = member.Member.SizeFactor(aboutY: true, MemberSizeFactor);
+            i.KhZ = member.Member.SizeFactor(aboutY: false, MemberSizeFactor);
             if (!ApplySizeFactor)
             {
                 i.KhY = Math.Min(i.KhY, 1.0);
