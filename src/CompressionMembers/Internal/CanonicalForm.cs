@@ -35,5 +35,22 @@ internal sealed class CanonicalForm
 
     internal CanonicalForm Add(string key, bool value) => Add(key, value ? "true" : "false");
 
+    /// <summary>Appends lines formed earlier by <see cref="Segment"/>: the same text as writing them again.</summary>
+    internal CanonicalForm AddSegment(string lines)
+    {
+        _text.Append(lines);
+        return this;
+    }
+
+    /// <summary>The lines <paramref name="write"/> adds, as one string, for an immutable object to keep: a schedule
+    /// fingerprints every row, and most rows share their material, section, restraint and method, whose numbers then
+    /// need not be formatted again.</summary>
+    internal static string Segment(System.Action<CanonicalForm> write)
+    {
+        var form = new CanonicalForm();
+        write(form);
+        return form.ToString();
+    }
+
     public override string ToString() => _text.ToString();
 }

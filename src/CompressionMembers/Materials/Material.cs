@@ -70,6 +70,12 @@ public abstract class Material
     /// <summary>The family this material belongs to.</summary>
     public abstract MaterialKind Kind { get; }
 
+    private string? _canonicalSegment;
+
+    /// <summary>The material's canonical lines, formed on first use and kept (a material never changes; two threads that
+    /// race form the same text).</summary>
+    internal string CanonicalSegment => _canonicalSegment ??= CanonicalForm.Segment(AddCanonical);
+
     /// <summary>Adds the material's defining values to the canonical input form; families add their own values.</summary>
     internal virtual void AddCanonical(CanonicalForm form)
     {

@@ -131,10 +131,9 @@ public sealed class Member
 
     internal void AddCanonical(CanonicalForm form)
     {
-        form.Add("member.name", Name).Add("member.L", Length.Meters);
-        Material.AddCanonical(form);
-        Section.AddCanonical(form);
-        Restraint.AddCanonical(form);
+        // The material's, section's and restraint's lines are formed once per object and kept (the same text).
+        form.Add("member.name", Name).Add("member.L", Length.Meters)
+            .AddSegment(Material.CanonicalSegment).AddSegment(Section.CanonicalSegment).AddSegment(Restraint.CanonicalSegment);
     }
 
     /// <inheritdoc/>

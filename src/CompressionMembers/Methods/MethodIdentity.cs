@@ -44,6 +44,11 @@ public sealed class MethodIdentity
     public override string ToString() =>
         Name + (Standard.Length > 0 ? $" ({Standard}{(Edition.Length > 0 ? " " + Edition : "")}{(Clause.Length > 0 ? ", " + Clause : "")})" : "");
 
+    private string? _canonicalSegment;
+
+    /// <summary>The identity's canonical lines, formed on first use and kept (an identity never changes).</summary>
+    internal string CanonicalSegment => _canonicalSegment ??= CanonicalForm.Segment(AddCanonical);
+
     internal void AddCanonical(CanonicalForm form)
     {
         form.Add("method.name", Name).Add("method.standard", Standard).Add("method.edition", Edition).Add("method.clause", Clause);

@@ -67,7 +67,7 @@ public static class InputFingerprint
         member.AddCanonical(form);
         actions.AddCanonical(form);
         form.Add("method.type", method.GetType().FullName ?? method.GetType().Name);
-        method.Identity.AddCanonical(form);
+        form.AddSegment(method.Identity.CanonicalSegment);
     }
 
     /// <summary>The canonical text the fingerprint hashes, for inspection.</summary>

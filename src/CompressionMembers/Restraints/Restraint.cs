@@ -55,6 +55,11 @@ public sealed class Restraint
     /// <returns>The copy.</returns>
     public Restraint WithTorsional(AxisRestraint torsional) => new(AboutY, AboutZ, torsional);
 
+    private string? _canonicalSegment;
+
+    /// <summary>The restraint's canonical lines, formed on first use and kept (a restraint never changes).</summary>
+    internal string CanonicalSegment => _canonicalSegment ??= CanonicalForm.Segment(AddCanonical);
+
     internal void AddCanonical(CanonicalForm form)
     {
         AboutY.AddCanonical(form, "restraint.y");

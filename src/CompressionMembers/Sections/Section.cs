@@ -121,6 +121,11 @@ public abstract class Section
     /// <summary>Adds the section's defining values to the canonical input form.</summary>
     internal abstract void AddCanonical(CanonicalForm form);
 
+    private string? _canonicalSegment;
+
+    /// <summary>The section's canonical lines, formed on first use and kept (a section never changes).</summary>
+    internal string CanonicalSegment => _canonicalSegment ??= CanonicalForm.Segment(AddCanonical);
+
     /// <inheritdoc/>
     public override string ToString() => Designation;
 

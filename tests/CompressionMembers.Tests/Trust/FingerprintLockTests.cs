@@ -63,4 +63,19 @@ public class FingerprintLockTests(ITestOutputHelper output)
         output.WriteLine(InputFingerprint.CanonicalText(member, Actions, method));
         Assert.Equal(expected, actual);
     }
+    // The canonical lines of a material, section, restraint and method identity are formed on first use and kept with
+    // the object: sixteen threads fingerprinting the same fresh member at once (racing to form its section's lines) must
+    // all get the locked value, and so must a second pass that reads the kept lines.
+    [Theory]
+    [MemberData(nameof(Locked))]
+    public void Fingerprint_FirstUseOnManyThreadsAndKeptLines_GiveTheLockedValue(string family, Member member, IResistanceMethod method, string expected)
+    {
+        var fresh = Member.Create(member.Section, member.Material, member.Length, member.Restraint, member.Name);
+        var results = new string[16];
+        System.Threading.Tasks.Parallel.For(0, results.Length, new System.Threading.Tasks.ParallelOptions { MaxDegreeOfParallelism = 16 },
+            k => results[k] = InputFingerprint.Compute(fresh, Actions, method));
+        Assert.All(results, r => Assert.Equal(expected, r));
+        Assert.Equal(expected, InputFingerprint.Compute(fresh, Actions, method));
+        output.WriteLine($"{family}: {expected} on 16 threads and again");
+    }
 }
