@@ -393,5 +393,10 @@ public class MethodBenchmarks
     [Benchmark] public double ConstantsTyped() => Typed(_tube, _aluLoad, ResistanceMethods.AluminiumBucklingConstantsLrfd);
     [Benchmark] public double ConstantsRawLoop() { double s = 0; for (int i = 0; i < N; i++) s += ConstantsRaw(i, out _, out _); return s; }
     [Benchmark] public double TangentTyped() => Typed(_tube, _aluLoad, ResistanceMethods.TangentModulusRambergOsgood);
+    // Four methods through the one call site (an application that checks every member with several methods): the
+    // runtime's profile then sees four types there, and its inlining of the method's calls into the loop is limited. Compare
+    // with Ec5Typed + FireTyped + NdsTyped + Ec9Typed, each of which sees only its own method.
+    [Benchmark] public double MixedFourMethodsTyped() =>
+        Typed(_c24, _timberLoad, _ec5) + Typed(_c24Big, _timberLoad, ResistanceMethods.Ec5FireR30) + Typed(_dfl, _ndsLoad, _nds) + Typed(_tube, _aluLoad, ResistanceMethods.Eurocode9);
     [Benchmark] public double TangentRawLoop() { double s = 0; for (int i = 0; i < N; i++) s += TangentRaw(i, out _, out _); return s; }
 }
