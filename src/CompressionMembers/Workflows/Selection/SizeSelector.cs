@@ -276,7 +276,9 @@ public sealed class SizeSelector
         {
             try
             {
-                result = Check.Evaluate(rm, _cases[c], _s.Method, null);
+                // The caller has just asked AppliesTo for this case, so the method is evaluated directly (Check.Evaluate
+                // would ask again); the result validates itself when it is built.
+                result = _s.Method.Evaluate(rm, _cases[c], null);
                 return true;
             }
             catch (Exception ex) when (ex is not OperationCanceledException)
