@@ -72,7 +72,8 @@ public sealed class CapacityTable
             for (int j = 0; j < lens.Length; j++)
             {
                 var rm = ResolvedMember.From(j == 0 ? m : m.WithLength(lens[j]));
-                row[j] = method.AppliesTo(rm, ra).IsApplicable ? Check.Evaluate(rm, ra, method, null).DesignResistanceN : double.NaN;
+                // Applicability asked once: an inapplicable cell is NaN, an applicable one is evaluated directly.
+                row[j] = method.AppliesTo(rm, ra).IsApplicable ? method.Evaluate(rm, ra, null).DesignResistanceN : double.NaN;
             }
             return row;
         }, options);
