@@ -28,34 +28,36 @@ internal static class Ec5Trace
         string dRef = fi.Length == 0 ? "EN 1995-1-1 2.4.1 (2.14)" : "EN 1995-1-2 2.3 (2.1)";
         string km = fi.Length == 0 ? "kmod" : "kmod,fi";
         string gm = fi.Length == 0 ? "γM" : "γM,fi";
-        t.Add("fc,0,d" + fi, "design compression strength parallel to grain", fi.Length == 0 ? "kmod fc,0,k / γM" : "kmod,fi kfi fc,0,k / γM,fi", o.Fc0dPa, StepUnit.Stress, dRef);
-        t.Add("σc,0,d" + fi, "design compressive stress", "NEd / A", o.SigmaCPa, StepUnit.Stress, "EN 1995-1-1 6.1.4");
+        // The symbols of the stresses and strengths, with ",fi" in fire, so that every expression names the step it uses.
+        string sc = "σc,0,d" + fi, fc = "fc,0,d" + fi, smy = "σm,y,d" + fi, smz = "σm,z,d" + fi, fmy = "fm,y,d" + fi, fmz = "fm,z,d" + fi;
+        t.Add(fc, "design compression strength parallel to grain", fi.Length == 0 ? "kmod fc,0,k / γM" : "kmod,fi kfi fc,0,k / γM,fi", o.Fc0dPa, StepUnit.Stress, dRef);
+        t.Add(sc, "design compressive stress", "NEd / A" + fi, o.SigmaCPa, StepUnit.Stress, "EN 1995-1-1 6.1.4");
         if (o.Bending)
         {
-            t.Add("Wy", "section modulus about y", "Iy / zmax", i.WyM3, StepUnit.SectionModulus, "section");
-            t.Add("Wz", "section modulus about z", "Iz / ymax", i.WzM3, StepUnit.SectionModulus, "section");
-            t.Add("fm,y,d" + fi, "design bending strength about y", fi.Length == 0 ? $"{km} kh,y fm,k / {gm}" : $"{km} kfi fm,k / {gm}", o.FmydPa, StepUnit.Stress, dRef);
-            t.Add("fm,z,d" + fi, "design bending strength about z", fi.Length == 0 ? $"{km} kh,z fm,k / {gm}" : $"{km} kfi fm,k / {gm}", o.FmzdPa, StepUnit.Stress, dRef);
-            t.Add("σm,y,d" + fi, "design bending stress about y", "My,Ed / Wy", o.SigmaMyPa, StepUnit.Stress, "EN 1995-1-1 6.1.6");
-            t.Add("σm,z,d" + fi, "design bending stress about z", "Mz,Ed / Wz", o.SigmaMzPa, StepUnit.Stress, "EN 1995-1-1 6.1.6");
+            t.Add("Wy" + fi, "section modulus about y", "Iy" + fi + " / zmax", i.WyM3, StepUnit.SectionModulus, "section");
+            t.Add("Wz" + fi, "section modulus about z", "Iz" + fi + " / ymax", i.WzM3, StepUnit.SectionModulus, "section");
+            t.Add(fmy, "design bending strength about y", fi.Length == 0 ? $"{km} kh,y fm,k / {gm}" : $"{km} kfi fm,k / {gm}", o.FmydPa, StepUnit.Stress, dRef);
+            t.Add(fmz, "design bending strength about z", fi.Length == 0 ? $"{km} kh,z fm,k / {gm}" : $"{km} kfi fm,k / {gm}", o.FmzdPa, StepUnit.Stress, dRef);
+            t.Add(smy, "design bending stress about y", "My,Ed / Wy" + fi, o.SigmaMyPa, StepUnit.Stress, "EN 1995-1-1 6.1.6");
+            t.Add(smz, "design bending stress about z", "Mz,Ed / Wz" + fi, o.SigmaMzPa, StepUnit.Stress, "EN 1995-1-1 6.1.6");
             t.Add("km", "redistribution factor for biaxial bending", i.Rectangular ? "0.7 (rectangular section)" : "1.0 (other sections)", i.Km, StepUnit.None, "EN 1995-1-1 6.1.6(2)");
             if (o.Stocky)
             {
                 t.Note("λrel,y ≤ 0.3 and λrel,z ≤ 0.3: the cross-section expressions (6.19) and (6.20) apply.", "EN 1995-1-1 6.3.2(2)");
-                t.Add("u(6.19)", "compression and bending, bending about y leading", "(σc,0,d / fc,0,d)² + σm,y,d / fm,y,d + km σm,z,d / fm,z,d", o.UY, StepUnit.None, "EN 1995-1-1 6.2.4 (6.19)");
-                t.Add("u(6.20)", "compression and bending, bending about z leading", "(σc,0,d / fc,0,d)² + km σm,y,d / fm,y,d + σm,z,d / fm,z,d", o.UZ, StepUnit.None, "EN 1995-1-1 6.2.4 (6.20)");
+                t.Add("u(6.19)", "compression and bending, bending about y leading", $"({sc} / {fc})² + {smy} / {fmy} + km {smz} / {fmz}", o.UY, StepUnit.None, "EN 1995-1-1 6.2.4 (6.19)");
+                t.Add("u(6.20)", "compression and bending, bending about z leading", $"({sc} / {fc})² + km {smy} / {fmy} + {smz} / {fmz}", o.UZ, StepUnit.None, "EN 1995-1-1 6.2.4 (6.20)");
             }
             else
             {
                 t.Note("λrel > 0.3 about at least one axis: the column expressions (6.23) and (6.24) apply.", "EN 1995-1-1 6.3.2(3)");
-                t.Add("u(6.23)", "compression and bending, buckling about y", "σc,0,d / (kc,y fc,0,d) + σm,y,d / fm,y,d + km σm,z,d / fm,z,d", o.UY, StepUnit.None, "EN 1995-1-1 6.3.2 (6.23)");
-                t.Add("u(6.24)", "compression and bending, buckling about z", "σc,0,d / (kc,z fc,0,d) + km σm,y,d / fm,y,d + σm,z,d / fm,z,d", o.UZ, StepUnit.None, "EN 1995-1-1 6.3.2 (6.24)");
+                t.Add("u(6.23)", "compression and bending, buckling about y", $"{sc} / (kc,y {fc}) + {smy} / {fmy} + km {smz} / {fmz}", o.UY, StepUnit.None, "EN 1995-1-1 6.3.2 (6.23)");
+                t.Add("u(6.24)", "compression and bending, buckling about z", $"{sc} / (kc,z {fc}) + km {smy} / {fmy} + {smz} / {fmz}", o.UZ, StepUnit.None, "EN 1995-1-1 6.3.2 (6.24)");
             }
         }
         else
         {
-            t.Add("uy", "compression, buckling about y", "σc,0,d / (kc,y fc,0,d)", o.UY, StepUnit.None, o.LambdaRelY <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2)" : "EN 1995-1-1 6.3.2 (6.23)");
-            t.Add("uz", "compression, buckling about z", "σc,0,d / (kc,z fc,0,d)", o.UZ, StepUnit.None, o.LambdaRelZ <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2)" : "EN 1995-1-1 6.3.2 (6.24)");
+            t.Add("uy", "compression, buckling about y", $"{sc} / (kc,y {fc})", o.UY, StepUnit.None, o.LambdaRelY <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2)" : "EN 1995-1-1 6.3.2 (6.23)");
+            t.Add("uz", "compression, buckling about z", $"{sc} / (kc,z {fc})", o.UZ, StepUnit.None, o.LambdaRelZ <= 0.3 ? "EN 1995-1-1 6.1.4 (6.2)" : "EN 1995-1-1 6.3.2 (6.24)");
         }
 
         if (o.LtbChecked)
@@ -71,10 +73,10 @@ internal static class Ec5Trace
             }
             t.Add("λrel,m", "relative slenderness for bending", "√(fm,k / σm,crit)", o.LambdaRelM, StepUnit.None, "EN 1995-1-1 6.3.3 (6.30)");
             t.Add("kcrit", "lateral buckling factor", o.LambdaRelM <= 0.75 ? "1 (λrel,m ≤ 0.75)" : o.LambdaRelM <= 1.4 ? "1.56 − 0.75 λrel,m" : "1 / λrel,m²", o.KCrit, StepUnit.None, "EN 1995-1-1 6.3.3 (6.34)");
-            t.Add("u(6.35)", "compression with lateral torsional buckling", "(σm,d / (kcrit fm,d))² + σc,d / (kc,z fc,0,d)", o.ULtb, StepUnit.None, "EN 1995-1-1 6.3.3 (6.35)");
+            t.Add("u(6.35)", "compression with lateral torsional buckling", $"(σm,d{fi} / (kcrit fm,d{fi}))² + σc,d{fi} / (kc,z {fc})", o.ULtb, StepUnit.None, "EN 1995-1-1 6.3.3 (6.35)");
         }
 
-        t.Add("Nc,Rd" + fi, "design buckling resistance in pure compression", "min(kc,y, kc,z) fc,0,d A", o.ResistanceN, StepUnit.Force, "EN 1995-1-1 6.3.2");
+        t.Add("Nc,Rd" + fi, "design buckling resistance in pure compression", $"min(kc,y, kc,z) {fc} A{fi}", o.ResistanceN, StepUnit.Force, "EN 1995-1-1 6.3.2");
         t.Add("u", "utilisation (governing check)", "max of the checks above", o.Utilisation, StepUnit.None, Ec5Kernel.CheckName(o));
     }
 }
