@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials.Aluminium;
 using CompressionMembers.Methods.Common;
@@ -77,14 +78,18 @@ public sealed class BucklingConstantMethod : IResistanceMethod
     /// <inheritdoc/>
     public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
     {
-        if (member.Member.Material is not AluminiumAlloy)
-            return Applicability.NotApplicable($"the buckling-constant method is for aluminium alloys; \"{member.Member.Material.Name}\" is a {member.MaterialKind} material.");
+        if (member.Member.Material is not AluminiumAlloy) return NotAluminium(member);
         if (actions.HasEccentricity || actions.HasEndMoments)
             return Applicability.NotApplicable("this buckling-constant check covers concentric compression only; use EN 1999-1-1 for compression with bending.");
         if (actions.HasInitialBowY || actions.HasInitialBowZ)
             return Applicability.NotApplicable("the buckling constants already allow for out-of-straightness; remove the initial bow.");
         return Applicability.Applicable;
     }
+
+    // The refusal's sentence, built only when refused and kept out of the code of every check.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability NotAluminium(in ResolvedMember member) =>
+        Applicability.NotApplicable($"the buckling-constant method is for aluminium alloys; \"{member.Member.Material.Name}\" is a {member.MaterialKind} material.");
 
     /// <summary>Whether a temper is artificially aged (T5 to T9).</summary>
     internal static bool IsArtificiallyAged(string temper) =>

@@ -114,24 +114,16 @@ public sealed class Eurocode9Compression : IResistanceMethod
     /// <inheritdoc/>
     public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
     {
-        if (member.Member.Material is not AluminiumAlloy alloy)
-            return Applicability.NotApplicable(
-                $"EN 1999-1-1 needs an aluminium alloy with its f0, fu, buckling class and HAZ factors; \"{member.Member.Material.Name}\" is a {member.MaterialKind} material. Use a preset of AluminiumAlloys or AluminiumAlloy.Create.");
+        if (member.Member.Material is not AluminiumAlloy alloy) return NotAluminium(member);
         var section = member.Member.Section;
-        if (!Ec9Section.Supports(member.SectionKind))
-            return Applicability.NotApplicable(
-                $"EN 1999-1-1 classification needs the flat parts of the section, which a {section.Kind} section does not give; use an I, channel, angle, tee, box or round tube, or a solid bar.");
+        if (!Ec9Section.Supports(member.SectionKind)) return NoFlatParts(section);
         bool welded = Welding.Location == WeldLocation.Longitudinal;
         var entry = Ec9ClassificationCache.Get(section, alloy, welded);   // classified once per section, alloy and welding
         ref readonly var c = ref entry.Result;
-        if (!entry.ThicknessCovered)
-            return Applicability.NotApplicable(
-                $"the section's thickness ({Guard.Show(c.MinThicknessM * 1e3)}–{Guard.Show(c.MaxThicknessM * 1e3)} mm) is outside the range {Guard.Show(alloy.MinimumThickness.Millimeters)}–{Guard.Show(alloy.MaximumThickness.Millimeters)} mm for which the values of {alloy.Name} hold; use the alloy values for that thickness.");
+        if (!entry.ThicknessCovered) return ThicknessNotCovered(c, alloy);
         if (IsOpenForTorsion(member.SectionKind) && !member.HasTorsionalProperties)
             return Applicability.NotApplicable("torsional and flexural-torsional buckling need the torsion constant, warping constant and shear centre, which this section does not give.");
-        if (welded && Welding.HeatAffectedAreaM2 >= member.AreaM2)
-            return Applicability.NotApplicable(
-                $"the heat-affected area of the longitudinal welds ({Guard.Show(Welding.HeatAffectedAreaM2 * 1e6)} mm²) is not less than the section's area ({Guard.Show(member.AreaM2 * 1e6)} mm²); check the weld layout.");
+        if (welded && Welding.HeatAffectedAreaM2 >= member.AreaM2) return HeatAffectedAreaTooLarge(member.AreaM2);
         if (welded && Welding.Process == WeldingProcess.Tig && c.MaxThicknessM > 0.006)
             return Applicability.NotApplicable("EN 1999-1-1 covers TIG-welded HAZ only up to 6 mm thickness (from memory); the section is thicker.");
         if (actions.HasInitialBowY || actions.HasInitialBowZ)
@@ -147,6 +139,23 @@ public sealed class Eurocode9Compression : IResistanceMethod
         }
         return Applicability.Applicable;
     }
+
+    // The refusals' sentences, built only when refused and kept out of the code of every check.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability NotAluminium(in ResolvedMember member) => Applicability.NotApplicable(
+        $"EN 1999-1-1 needs an aluminium alloy with its f0, fu, buckling class and HAZ factors; \"{member.Member.Material.Name}\" is a {member.MaterialKind} material. Use a preset of AluminiumAlloys or AluminiumAlloy.Create.");
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability NoFlatParts(Section section) => Applicability.NotApplicable(
+        $"EN 1999-1-1 classification needs the flat parts of the section, which a {section.Kind} section does not give; use an I, channel, angle, tee, box or round tube, or a solid bar.");
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability ThicknessNotCovered(in Ec9Classified c, AluminiumAlloy alloy) => Applicability.NotApplicable(
+        $"the section's thickness ({Guard.Show(c.MinThicknessM * 1e3)}–{Guard.Show(c.MaxThicknessM * 1e3)} mm) is outside the range {Guard.Show(alloy.MinimumThickness.Millimeters)}–{Guard.Show(alloy.MaximumThickness.Millimeters)} mm for which the values of {alloy.Name} hold; use the alloy values for that thickness.");
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private Applicability HeatAffectedAreaTooLarge(double areaM2) => Applicability.NotApplicable(
+        $"the heat-affected area of the longitudinal welds ({Guard.Show(Welding.HeatAffectedAreaM2 * 1e6)} mm²) is not less than the section's area ({Guard.Show(areaM2 * 1e6)} mm²); check the weld layout.");
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>

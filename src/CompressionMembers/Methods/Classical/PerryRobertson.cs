@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Internal;
 using CompressionMembers.Methods.Common;
 using CompressionMembers.Resolution;
@@ -73,28 +74,37 @@ public sealed class PerryRobertson : IResistanceMethod
         double seY = Math.PI * Math.PI * e / (y.Slenderness * y.Slenderness);
         double seZ = Math.PI * Math.PI * e / (z.Slenderness * z.Slenderness);
         double sY = CriticalStress(f, seY, etaY), sZ = CriticalStress(f, seZ, etaZ);
-        if (trace is not null)
-        {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Member.Material.Source);
-            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Member.Material.Source);
-            TraceCommon.SectionAndLengths(trace, member);
-            trace.Note("Imperfection: " + Imperfection.Description + ".", Ref);
-            AxisSteps(trace, y, etaY, seY, sY, a);
-            AxisSteps(trace, z, etaZ, seZ, sZ, a);
-        }
+        if (trace is not null) TraceAxes(trace, member, y, z, etaY, etaZ, seY, seZ, sY, sZ);
         bool govY = sY <= sZ;
         double capacity = Math.Min(sY, sZ) * a;
         double u = actions.AxialForceN / capacity;
-        if (trace is not null)
-        {
-            trace.Add("N", "nominal capacity", "min(Ny, Nz)", capacity, StepUnit.Force, Ref);
-            ClassicalRules.Verdict(trace, actions.AxialForceN, capacity, u);
-        }
+        if (trace is not null) TraceVerdict(trace, actions.AxialForceN, capacity, u);
         return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z, FailureMode.FlexuralBuckling,
             "Perry–Robertson: extreme fibre of the bowed strut reaches f",
             new AxisOutcome(y.EffectiveLengthM, y.Slenderness, Math.Sqrt(f / seY), y.CriticalForceN, sY / f, sY * a),
             new AxisOutcome(z.EffectiveLengthM, z.Slenderness, Math.Sqrt(f / seZ), z.CriticalForceN, sZ / f, sZ * a),
             default, trace);
+    }
+
+    // The steps are written in separate, non-inlined methods, so that the untraced check carries none of their string
+    // building (Performance/ColdPathTests).
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void TraceAxes(CalculationTrace trace, in ResolvedMember member, in AxisData y, in AxisData z,
+        double etaY, double etaZ, double seY, double seZ, double sY, double sZ)
+    {
+        trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Member.Material.Source);
+        trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Member.Material.Source);
+        TraceCommon.SectionAndLengths(trace, member);
+        trace.Note("Imperfection: " + Imperfection.Description + ".", Ref);
+        AxisSteps(trace, y, etaY, seY, sY, member.AreaM2);
+        AxisSteps(trace, z, etaZ, seZ, sZ, member.AreaM2);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceVerdict(CalculationTrace trace, double demandN, double capacityN, double u)
+    {
+        trace.Add("N", "nominal capacity", "min(Ny, Nz)", capacityN, StepUnit.Force, Ref);
+        ClassicalRules.Verdict(trace, demandN, capacityN, u);
     }
 
     private static void AxisSteps(CalculationTrace t, in AxisData ax, double eta, double sigmaE, double sigma, double a)

@@ -159,14 +159,14 @@ public static class En1995Factors
     }
 
     /// <summary>Whether Table 3.1 covers the product at this density, and if not, why (null when covered).</summary>
-    internal static string? CharringCoverage(TimberProduct p, double rhok)
-    {
-        if (p == TimberProduct.Lvl && rhok < 480)
-            return $"EN 1995-1-2 Table 3.1 gives charring rates for LVL with ρk ≥ 480 kg/m³; this product has ρk = {Internal.Guard.Show(rhok)} kg/m³. Give the charring rate explicitly.";
-        if (rhok < 290)
-            return $"EN 1995-1-2 Table 3.1 gives charring rates for timber with ρk ≥ 290 kg/m³; this material has ρk = {Internal.Guard.Show(rhok)} kg/m³. Give the charring rate explicitly.";
-        return null;
-    }
+    internal static string? CharringCoverage(TimberProduct p, double rhok) =>
+        (p == TimberProduct.Lvl && rhok < 480) || rhok < 290 ? CharringNotCovered(p, rhok) : null;
+
+    // The sentence, built only when refused and kept out of the code of every fire check.
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.NoInlining)]
+    private static string CharringNotCovered(TimberProduct p, double rhok) => p == TimberProduct.Lvl && rhok < 480
+        ? $"EN 1995-1-2 Table 3.1 gives charring rates for LVL with ρk ≥ 480 kg/m³; this product has ρk = {Internal.Guard.Show(rhok)} kg/m³. Give the charring rate explicitly."
+        : $"EN 1995-1-2 Table 3.1 gives charring rates for timber with ρk ≥ 290 kg/m³; this material has ρk = {Internal.Guard.Show(rhok)} kg/m³. Give the charring rate explicitly.";
 
     internal static double CharringRateMmPerMin(TimberProduct p, double rhok, bool notional, string paramName = "material")
     {

@@ -3,6 +3,7 @@ using System.Runtime.CompilerServices;
 using System.Collections.Generic;
 using CompressionMembers.Actions;
 using CompressionMembers.Internal;
+using CompressionMembers.Materials;
 using CompressionMembers.Materials.Timber;
 using CompressionMembers.Methods.Common;
 using CompressionMembers.Resolution;
@@ -224,12 +225,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     /// <inheritdoc/>
     public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
     {
-        if (member.Member.Material is not NdsTimberMaterial mat)
-        {
-            if (member.Member.Material is TimberMaterial)
-                return Applicability.NotApplicable($"{Name} needs US reference design values (NdsTimberMaterial: Fc, Fb, E, Emin); \"{member.Member.Material.Name}\" is a European strength class: use the EN 1995-1-1 column method.");
-            return Applicability.NotApplicable($"{Name} covers wood only; \"{member.Member.Material.Name}\" is a {member.Member.Material.Kind} material. Use an NdsTimberMaterial (NdsGrades.…) or another method.");
-        }
+        if (member.Member.Material is not NdsTimberMaterial mat) return NotNds(member.Member.Material);
         var v = TimberRules.SolidSection(member, Name, allowCircle: true);
         if (!v.IsApplicable) return v;
         v = TimberRules.NoInitialBow(actions, Name);
@@ -242,23 +238,34 @@ public sealed class NdsColumnStability : IResistanceMethod
         Slenderness(member, out _, out _, out double r1, out double r2);
         double r = Math.Max(r1, r2);
         // A relative 1e-9 allowance absorbs unit-conversion rounding (75 in / 1.5 in in SI gives 50.000000000001).
-        if (r > SlendernessLimit * (1 + 1e-9))
-            return Applicability.NotApplicable(AllowsConstructionSlenderness
-                ? $"le/d = {Guard.Show(r)} exceeds 75, the most NDS 3.7.1.4 allows even during construction; brace the column or enlarge the section."
-                : $"le/d = {Guard.Show(r)} exceeds 50 (NDS 3.7.1.4); brace the column or enlarge the section (75 is allowed during construction only: create the method with allowConstructionSlenderness: true).");
+        if (r > SlendernessLimit * (1 + 1e-9)) return TooSlender(r);
         if (member.SectionKind == SectionKind.SolidRectangle && TimberRules.MomentY(actions) > 0)
         {
             TimberRules.Dimensions(member, out double b, out double h);
             if (h > b)
             {
                 double rb = Math.Sqrt(BendingEffectiveLength(member.EffectiveLengthTorsionalM, h) * h / (b * b));
-                if (rb > 50)
-                    return Applicability.NotApplicable($"the slenderness ratio for bending RB = {Guard.Show(rb)} exceeds 50 (NDS 3.3.3.7); brace the compression edge against twist or widen the section.");
+                if (rb > 50) return TooSlenderInBending(rb);
             }
         }
         _ = mat;
         return Applicability.Applicable;
     }
+
+    // The refusals' sentences, built only when refused and kept out of the code of every check.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability NotNds(Material m) => m is TimberMaterial
+        ? Applicability.NotApplicable($"{Name} needs US reference design values (NdsTimberMaterial: Fc, Fb, E, Emin); \"{m.Name}\" is a European strength class: use the EN 1995-1-1 column method.")
+        : Applicability.NotApplicable($"{Name} covers wood only; \"{m.Name}\" is a {m.Kind} material. Use an NdsTimberMaterial (NdsGrades.…) or another method.");
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private Applicability TooSlender(double r) => Applicability.NotApplicable(AllowsConstructionSlenderness
+        ? $"le/d = {Guard.Show(r)} exceeds 75, the most NDS 3.7.1.4 allows even during construction; brace the column or enlarge the section."
+        : $"le/d = {Guard.Show(r)} exceeds 50 (NDS 3.7.1.4); brace the column or enlarge the section (75 is allowed during construction only: create the method with allowConstructionSlenderness: true).");
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability TooSlenderInBending(double rb) =>
+        Applicability.NotApplicable($"the slenderness ratio for bending RB = {Guard.Show(rb)} exceeds 50 (NDS 3.3.3.7); brace the compression edge against twist or widen the section.");
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)

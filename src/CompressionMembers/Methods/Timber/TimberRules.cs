@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Actions;
 using CompressionMembers.Materials;
 using CompressionMembers.Materials.Timber;
@@ -14,36 +15,44 @@ internal static class TimberRules
     internal const string Input = "input";
     internal const string MomentRule = "first order: |NEd e| + max |M,end| (common practice; kc covers the column effect)";
 
-    internal static Applicability EuropeanMaterial(in ResolvedMember m, string method)
-    {
-        if (m.Member.Material is TimberMaterial) return Applicability.Applicable;
-        if (m.Member.Material is NdsTimberMaterial)
-            return Applicability.NotApplicable($"{method} needs a European strength class (TimberMaterial, EN 338 / EN 14080 / LVL) with characteristic values; \"{m.Member.Material.Name}\" holds US reference design values: use the NDS column method.");
-        return Applicability.NotApplicable($"{method} covers timber only; \"{m.Member.Material.Name}\" is a {m.Member.Material.Kind} material. Use a TimberMaterial (TimberGrades.C24, GL28h, …) or another method.");
-    }
+    // Each rule tests inline and builds its sentence in a separate, non-inlined method: the sentences are formed only when
+    // a method is refused, and kept out of the code of every check (where the JIT would otherwise inline the string
+    // building into the caller's loop, with its spills and its share of the inlining budget).
+
+    internal static Applicability EuropeanMaterial(in ResolvedMember m, string method) =>
+        m.Member.Material is TimberMaterial ? Applicability.Applicable : NotEuropean(m.Member.Material, method);
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability NotEuropean(Material mat, string method) => mat is NdsTimberMaterial
+        ? Applicability.NotApplicable($"{method} needs a European strength class (TimberMaterial, EN 338 / EN 14080 / LVL) with characteristic values; \"{mat.Name}\" holds US reference design values: use the NDS column method.")
+        : Applicability.NotApplicable($"{method} covers timber only; \"{mat.Name}\" is a {mat.Kind} material. Use a TimberMaterial (TimberGrades.C24, GL28h, …) or another method.");
 
     internal static Applicability SolidSection(in ResolvedMember m, string method, bool allowCircle)
     {
         var k = m.SectionKind;
         if (k == SectionKind.SolidRectangle || (allowCircle && k == SectionKind.SolidCircle)) return Applicability.Applicable;
-        return Applicability.NotApplicable(allowCircle
-            ? $"{method} addresses solid rectangular and circular timber sections; \"{m.Member.Section.Designation}\" is a {k} section. Model it as a RectangleSection or CircleSection, or use another method."
-            : $"{method} addresses solid rectangular timber sections (RectangleSection); \"{m.Member.Section.Designation}\" is a {k} section.");
+        return NotSolid(m.Member.Section.Designation, k, method, allowCircle);
     }
 
-    internal static Applicability NoInitialBow(in ResolvedActions a, string method)
-    {
-        if (a.HasInitialBowY || a.HasInitialBowZ)
-            return Applicability.NotApplicable($"{method} allows for initial bow through its column curve (βc, within the straightness limits of EN 1995-1-1 10.2: L/300 solid timber, L/500 glulam and LVL); remove the initial bow from the actions, or use a second-order method that takes it.");
-        return Applicability.Applicable;
-    }
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability NotSolid(string designation, SectionKind k, string method, bool allowCircle) =>
+        Applicability.NotApplicable(allowCircle
+            ? $"{method} addresses solid rectangular and circular timber sections; \"{designation}\" is a {k} section. Model it as a RectangleSection or CircleSection, or use another method."
+            : $"{method} addresses solid rectangular timber sections (RectangleSection); \"{designation}\" is a {k} section.");
 
-    internal static Applicability Duration(in ResolvedActions a, string method, string what)
-    {
-        if (a.LoadDuration == LoadDurationClass.Unspecified)
-            return Applicability.NotApplicable($"{method} needs the load-duration class of the action case to set {what}; give it with DesignActions.WithLoadDuration (permanent, long-term, medium-term, short-term or instantaneous), or give {what} explicitly when creating the method.");
-        return Applicability.Applicable;
-    }
+    internal static Applicability NoInitialBow(in ResolvedActions a, string method) =>
+        a.HasInitialBowY || a.HasInitialBowZ ? HasBow(method) : Applicability.Applicable;
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability HasBow(string method) =>
+        Applicability.NotApplicable($"{method} allows for initial bow through its column curve (βc, within the straightness limits of EN 1995-1-1 10.2: L/300 solid timber, L/500 glulam and LVL); remove the initial bow from the actions, or use a second-order method that takes it.");
+
+    internal static Applicability Duration(in ResolvedActions a, string method, string what) =>
+        a.LoadDuration == LoadDurationClass.Unspecified ? NoDuration(method, what) : Applicability.Applicable;
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability NoDuration(string method, string what) =>
+        Applicability.NotApplicable($"{method} needs the load-duration class of the action case to set {what}; give it with DesignActions.WithLoadDuration (permanent, long-term, medium-term, short-term or instantaneous), or give {what} explicitly when creating the method.");
 
     /// <summary>First-order design moment about y at the governing section: |N ey| + max(|My,top|, |My,bottom|).</summary>
     internal static double MomentY(in ResolvedActions a) =>

@@ -1,0 +1,134 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Reflection;
+using System.Reflection.Emit;
+using System.Runtime.CompilerServices;
+using CompressionMembers.Methods;
+
+namespace CompressionMembers.Tests.Performance;
+
+/// <summary>
+/// The applicability test runs before every check, so what it holds in line is paid on every check: the JIT inlines it,
+/// and the rules it calls, into the caller's loop. The sentences that explain a refusal must therefore be built in
+/// separate methods marked <see cref="MethodImplOptions.NoInlining"/>; built in line (an interpolated string), they made a
+/// fire check's applicability test 1,363 bytes of machine code, spilled the loop's registers and used up the inlining
+/// budget of the caller (measured: EN 1995-1-2 R30 typed ÷ raw 2.2–2.9 with the sentences in line, 1.4 in the fast mode
+/// without; docs/performance.md). This test reads the IL of every built-in method's <c>AppliesTo</c> and of the library
+/// methods it calls that may be inlined, and fails on any string building there.
+/// </summary>
+public class ColdPathTests
+{
+    private static readonly Dictionary<short, OpCode> OpCodesByValue = typeof(OpCodes)
+        .GetFields(BindingFlags.Public | BindingFlags.Static)
+        .Select(f => (OpCode)f.GetValue(null)!)
+        .ToDictionary(o => o.Value);
+
+    public static TheoryData<string> BuiltInMethods()
+    {
+        var data = new TheoryData<string>();
+        foreach (var t in BuiltInMethodTypes()) data.Add(t.FullName!);
+        return data;
+    }
+
+    // The closed-form methods, whose checks take tens of nanoseconds. The numerical methods (Methods.Numerical) are left
+    // out: their applicability test builds the model they then solve, and a check takes micro- to milliseconds.
+    private static IEnumerable<Type> BuiltInMethodTypes() =>
+        typeof(IResistanceMethod).Assembly.GetTypes()
+            .Where(t => t is { IsClass: true, IsAbstract: false } && typeof(IResistanceMethod).IsAssignableFrom(t)
+                && t.Namespace != "CompressionMembers.Methods.Numerical")
+            .OrderBy(t => t.FullName, StringComparer.Ordinal);
+
+    [Fact]
+    public void EveryClosedFormMethodIsCovered() =>
+        Assert.Equal(10, BuiltInMethodTypes().Count());   // Euler, Johnson, secant, Perry–Robertson, EC5, EC5 fire, NDS, EC9, constants, tangent
+
+    [Theory]
+    [MemberData(nameof(BuiltInMethods))]
+    public void AppliesTo_BuildsNoSentenceInLine(string typeName)
+    {
+        var type = typeof(IResistanceMethod).Assembly.GetType(typeName)!;
+        var appliesTo = type.GetMethod(nameof(IResistanceMethod.AppliesTo), BindingFlags.Public | BindingFlags.Instance)!;
+        var found = new List<string>();
+        Walk(appliesTo, appliesTo.Name, found, new HashSet<MethodBase>(), depth: 0);
+        Assert.True(found.Count == 0,
+            $"{type.Name}.AppliesTo builds strings in line (move the sentence into a [MethodImpl(MethodImplOptions.NoInlining)] method):\n  "
+            + string.Join("\n  ", found));
+    }
+
+    [Theory]
+    [MemberData(nameof(BuiltInMethods))]
+    public void Evaluate_BuildsNoStringInLine(string typeName)
+    {
+        var type = typeof(IResistanceMethod).Assembly.GetType(typeName)!;
+        var evaluate = type.GetMethod(nameof(IResistanceMethod.Evaluate), BindingFlags.Public | BindingFlags.Instance)!;
+        var found = new List<string>();
+        Walk(evaluate, evaluate.Name, found, new HashSet<MethodBase>(), depth: 0);
+        Assert.True(found.Count == 0,
+            $"{type.Name}.Evaluate builds strings in line (trace writing belongs in a [MethodImpl(MethodImplOptions.NoInlining)] method):\n  "
+            + string.Join("\n  ", found));
+    }
+
+    [Fact]
+    public void TheWalkerFindsStringBuilding()
+    {
+        // The walker itself: a method that builds an interpolated string in line is found.
+        var found = new List<string>();
+        Walk(typeof(ColdPathTests).GetMethod(nameof(BuildsInLine), BindingFlags.NonPublic | BindingFlags.Static)!, "BuildsInLine", found,
+            new HashSet<MethodBase>(), 0);
+        Assert.NotEmpty(found);
+    }
+
+    private static string BuildsInLine(int n) => $"n = {n} is out of range";
+
+    private static void Walk(MethodBase method, string path, List<string> found, HashSet<MethodBase> seen, int depth)
+    {
+        if (!seen.Add(method) || depth > 4) return;
+        var body = method.GetMethodBody();
+        if (body is null) return;
+        byte[] il = body.GetILAsByteArray() ?? [];
+        var module = method.Module;
+        Type[]? typeArgs = method.DeclaringType is { IsGenericType: true } dt ? dt.GetGenericArguments() : null;
+        Type[]? methodArgs = method.IsGenericMethod ? method.GetGenericArguments() : null;
+        int pc = 0;
+        while (pc < il.Length)
+        {
+            short value = il[pc] == 0xFE ? unchecked((short)(0xFE00 | il[pc + 1])) : il[pc];
+            pc += il[pc] == 0xFE ? 2 : 1;
+            var op = OpCodesByValue[value];
+            if (op.OperandType == OperandType.InlineMethod)
+            {
+                var callee = module.ResolveMethod(BitConverter.ToInt32(il, pc), typeArgs, methodArgs)!;
+                string name = $"{callee.DeclaringType?.Name}.{callee.Name}";
+                if (BuildsString(callee)) found.Add($"{path} → {name}");
+                else if (callee.Module == typeof(IResistanceMethod).Module && Inlinable(callee))
+                    Walk(callee, $"{path} → {name}", found, seen, depth + 1);
+            }
+            pc += OperandSize(op.OperandType, il, pc);
+        }
+    }
+
+    private static bool BuildsString(MethodBase m) =>
+        m.DeclaringType == typeof(DefaultInterpolatedStringHandler)
+        || (m.DeclaringType == typeof(string) && m.Name is "Concat" or "Format" or "Join" or "Create")
+        || m.DeclaringType == typeof(System.Text.StringBuilder);
+
+    // What the JIT may inline: not marked NoInlining, and small (its default limit is 100 bytes of IL) or marked
+    // AggressiveInlining. A sentence built in a larger callee stays in that callee's own code.
+    private static bool Inlinable(MethodBase m)
+    {
+        var flags = m.MethodImplementationFlags;
+        if ((flags & MethodImplAttributes.NoInlining) != 0 || m.IsAbstract) return false;
+        return (flags & MethodImplAttributes.AggressiveInlining) != 0 || (m.GetMethodBody()?.GetILAsByteArray()?.Length ?? 0) <= 100;
+    }
+
+    private static int OperandSize(OperandType t, byte[] il, int pc) => t switch
+    {
+        OperandType.InlineNone => 0,
+        OperandType.ShortInlineBrTarget or OperandType.ShortInlineI or OperandType.ShortInlineVar => 1,
+        OperandType.InlineVar => 2,
+        OperandType.InlineI8 or OperandType.InlineR => 8,
+        OperandType.InlineSwitch => 4 + 4 * BitConverter.ToInt32(il, pc),
+        _ => 4,
+    };
+}
