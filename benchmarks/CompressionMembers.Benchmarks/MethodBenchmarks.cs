@@ -108,8 +108,10 @@ public class MethodBenchmarks
     // Every number a result carries (utilisation, resistance and, per axis or mode, λ, λ̄, Ncr, the reduction factor and the
     // resistance; the effective length is an input), so that the typed side is charged for all it computes and the raw
     // side must compute the same. NaN marks a value a method does not use; it counts as 0.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]   // the raw loops sum in line; so does the typed side
     private static double Sum(in CheckResult r) => r.Utilisation + r.DesignResistanceN + Sum(r.AboutY) + Sum(r.AboutZ) + Sum(r.Torsional);
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static double Sum(in AxisOutcome o) =>
         !o.IsEvaluated ? 0 : Z(o.Slenderness) + Z(o.RelativeSlenderness) + Z(o.CriticalForceN) + Z(o.ReductionFactor) + Z(o.ResistanceN);
 
