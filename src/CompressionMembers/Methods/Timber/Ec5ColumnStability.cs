@@ -239,6 +239,11 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     }
 
     // Compression with bending: the shared kernel (6.19/6.20 or 6.23/6.24, and 6.35), also used by the fire method.
+    // Not inlined: a large path (the general kernel and its records). Inlined into a caller's loop by profile-guided
+    // inlining, it used up the caller's inlining budget, so that the result's constructors and the caller's own code were
+    // left as calls with 240-byte copies (measured: EN 1995-1-1 with bending went from 1.1x to 1.8-2.2x the hand-written
+    // loop; docs/performance.md).
+    [MethodImpl(MethodImplOptions.NoInlining)]
     internal CheckResult EvaluateWithBending(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         var mat = (TimberMaterial)member.Member.Material;

@@ -251,6 +251,11 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     private const string CheckCompressionY = "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about y";
     private const string CheckCompressionZ = "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about z";
 
+    // Not inlined: a large path (the general kernel and its records). Inlined into a caller's loop by profile-guided
+    // inlining, it used up the caller's inlining budget, so that the result's constructors and the caller's own code were
+    // left as calls with 240-byte copies (measured: EN 1995-1-1 with bending went from 1.1x to 1.8-2.2x the hand-written
+    // loop; docs/performance.md).
+    [MethodImpl(MethodImplOptions.NoInlining)]
     internal CheckResult EvaluateGeneral(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         var mat = (TimberMaterial)member.Member.Material;
