@@ -140,31 +140,38 @@ public sealed class BucklingConstantMethod : IResistanceMethod
         int branch = govY ? by : bz;
         double capacity = factor * fc * a;
         double u = actions.AxialForceN / capacity;
-        if (trace is not null)
-        {
-            trace.Add("Fcy", "compressive yield strength (the alloy's f0)", TraceCommon.Input, fcy, StepUnit.Stress, alloy.Source);
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, alloy.Source);
-            TraceCommon.SectionAndLengths(trace, member);
-            trace.Note(aged ? "Artificially aged temper (T5–T9): constants for artificially aged tempers." : "Temper not artificially aged: constants for O, H, T1–T4 tempers.", Ref);
-            trace.Add("Bc", "buckling constant (intercept)", aged ? "Fcy [1 + (Fcy / 2250 ksi)^½]" : "Fcy [1 + (Fcy / 1000 ksi)^½]", bc, StepUnit.Stress, Ref);
-            trace.Add("Dc", "buckling constant (slope)", aged ? "(Bc / 10)(Bc / E)^½" : "(Bc / 20)(6 Bc / E)^½", dc, StepUnit.Stress, Ref);
-            trace.Add("Cc", "slenderness limit of the inelastic line", aged ? "0.41 Bc / Dc" : "2 Bc / (3 Dc)", cc, StepUnit.None, Ref);
-            trace.Add("S1", "slenderness limit of yielding", "(Bc − Fcy) / Dc", (bc - fcy) / dc, StepUnit.None, Ref);
-            Axis(trace, y, by, fy);
-            Axis(trace, z, bz, fz);
-            if (Basis == DesignBasis.Lrfd)
-                trace.Add("φc Pn", "design strength (LRFD)", "φc min(Fc,y, Fc,z) A", capacity, StepUnit.Force, Ref);
-            else
-                trace.Add("Pn / Ωc", "allowable strength (ASD)", "min(Fc,y, Fc,z) A / Ωc", capacity, StepUnit.Force, Ref);
-            trace.Add("P", "required strength", TraceCommon.Input, actions.AxialForceN, StepUnit.Force, "actions");
-            trace.Add("u", "utilisation", "P / strength", u, StepUnit.None, Ref);
-        }
+        if (trace is not null) TraceSteps(trace, member, actions, alloy, aged, bc, dc, cc, y, z, by, bz, fy, fz, capacity, u);
         return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z,
             branch == 0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling,
             branch == 0 ? CheckYield : branch == 1 ? CheckInelastic : CheckElastic,
             new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.Slenderness / cc, y.CriticalForceN, fy / fcy, factor * fy * a),
             new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.Slenderness / cc, z.CriticalForceN, fz / fcy, factor * fz * a),
             default, trace);
+    }
+
+    // The steps, written by a separate, non-inlined method from the values computed, so that the untraced check carries
+    // none of this code (Performance/ColdPathTests).
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private void TraceSteps(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, AluminiumAlloy alloy, bool aged,
+        double bc, double dc, double cc, in AxisData y, in AxisData z, int by, int bz, double fy, double fz, double capacity, double u)
+    {
+        double fcy = member.StrengthPa, e = member.ElasticModulusPa;
+        trace.Add("Fcy", "compressive yield strength (the alloy's f0)", TraceCommon.Input, fcy, StepUnit.Stress, alloy.Source);
+        trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, alloy.Source);
+        TraceCommon.SectionAndLengths(trace, member);
+        trace.Note(aged ? "Artificially aged temper (T5–T9): constants for artificially aged tempers." : "Temper not artificially aged: constants for O, H, T1–T4 tempers.", Ref);
+        trace.Add("Bc", "buckling constant (intercept)", aged ? "Fcy [1 + (Fcy / 2250 ksi)^½]" : "Fcy [1 + (Fcy / 1000 ksi)^½]", bc, StepUnit.Stress, Ref);
+        trace.Add("Dc", "buckling constant (slope)", aged ? "(Bc / 10)(Bc / E)^½" : "(Bc / 20)(6 Bc / E)^½", dc, StepUnit.Stress, Ref);
+        trace.Add("Cc", "slenderness limit of the inelastic line", aged ? "0.41 Bc / Dc" : "2 Bc / (3 Dc)", cc, StepUnit.None, Ref);
+        trace.Add("S1", "slenderness limit of yielding", "(Bc − Fcy) / Dc", (bc - fcy) / dc, StepUnit.None, Ref);
+        Axis(trace, y, by, fy);
+        Axis(trace, z, bz, fz);
+        if (Basis == DesignBasis.Lrfd)
+            trace.Add("φc Pn", "design strength (LRFD)", "φc min(Fc,y, Fc,z) A", capacity, StepUnit.Force, Ref);
+        else
+            trace.Add("Pn / Ωc", "allowable strength (ASD)", "min(Fc,y, Fc,z) A / Ωc", capacity, StepUnit.Force, Ref);
+        trace.Add("P", "required strength", TraceCommon.Input, actions.AxialForceN, StepUnit.Force, "actions");
+        trace.Add("u", "utilisation", "P / strength", u, StepUnit.None, Ref);
     }
 
     private static void Axis(CalculationTrace t, in AxisData ax, int branch, double fc)
