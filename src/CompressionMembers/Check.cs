@@ -1,7 +1,11 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Actions;
 using CompressionMembers.Members;
 using CompressionMembers.Methods;
+using CompressionMembers.Methods.Aluminium;
+using CompressionMembers.Methods.Classical;
+using CompressionMembers.Methods.Timber;
 using CompressionMembers.Resolution;
 using CompressionMembers.Results;
 
@@ -28,12 +32,8 @@ public static class Check
         ArgumentNullException.ThrowIfNull(member);
         ArgumentNullException.ThrowIfNull(actions);
         ArgumentNullException.ThrowIfNull(method);
-        ref readonly var rm = ref member.Resolved;
-        ref readonly var ra = ref actions.Resolved;
-        var verdict = method.AppliesTo(rm, ra);
-        if (!verdict.IsApplicable) ThrowNotApplicable(method, member, verdict.Reason!);
         // The result checked its own values when it was built, so it is handed on as it is (no copy).
-        return method.Evaluate(rm, ra, null);
+        return Run(in member.Resolved, in actions.Resolved, method, null);
     }
 
     /// <summary>Checks a member and records every step, for a report.</summary>
@@ -69,12 +69,39 @@ public static class Check
         ArgumentNullException.ThrowIfNull(method);
         if (!member.IsValid) throw new ArgumentException("The resolved member is default; use ResolvedMember.From(member).", nameof(member));
         if (!actions.IsValid) throw new ArgumentException("The resolved actions are default; use ResolvedActions.From(actions).", nameof(actions));
-        var verdict = method.AppliesTo(member, actions);
-        if (!verdict.IsApplicable) ThrowNotApplicable(method, member.Member, verdict.Reason!);
-        return method.Evaluate(member, actions, trace);
+        return Run(member, actions, method, trace);
     }
 
-    private static void ThrowNotApplicable(IResistanceMethod method, Member member, string reason) =>
+    // The applicability test, then the method. The closed-form built-in methods are sealed classes: each is recognised by a
+    // type test (one comparison) and called directly. Through the interface, the runtime devirtualises the two calls by
+    // guessing the method's class from a profile of this call site, which every caller of Check shares: in a process that
+    // had checked several methods, a loop over one method ran with the wrong guess (measured: EN 1995-1-2 2.4x and NDS 2.1x
+    // the hand-written loop, against 1.45x and 1.2x alone; docs/performance.md). Inlined into the caller's loop, the type
+    // tests are a few compares that always branch the same way. Other methods (the numerical ones, a user's own) go
+    // through the interface.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static CheckResult Run(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace)
+    {
+        Applicability verdict;
+        switch (method)
+        {
+            case Ec5ColumnStability m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case Ec5FireReducedSection m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case NdsColumnStability m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case Eurocode9Compression m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case BucklingConstantMethod m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case TangentModulusColumn m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case EulerBuckling m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case JohnsonParabola m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case SecantFormula m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case PerryRobertson m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            default: if ((verdict = method.AppliesTo(rm, ra)).IsApplicable) return method.Evaluate(rm, ra, trace); break;
+        }
+        return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static CheckResult ThrowNotApplicable(IResistanceMethod method, Member member, string reason) =>
         throw new MethodNotApplicableException(method, member, reason);
 
 }

@@ -71,6 +71,34 @@ public class ColdPathTests
     }
 
     [Fact]
+    public void CheckDispatch_NamesEveryClosedFormMethod()
+    {
+        // Check calls the closed-form methods directly after a type test, so that their speed does not depend on the
+        // runtime's guess at a shared interface call site (docs/performance.md). A new closed-form method must be added
+        // there; through the interface it still works, only slower in a process that checks several methods.
+        var run = typeof(Check).GetMethod("Run", BindingFlags.NonPublic | BindingFlags.Static)!;
+        var tested = TypesTestedIn(run);
+        foreach (var t in BuiltInMethodTypes())
+            Assert.True(tested.Contains(t), $"Check.Run has no case for {t.Name}: add it to the type switch.");
+    }
+
+    private static HashSet<Type> TypesTestedIn(MethodBase method)
+    {
+        var found = new HashSet<Type>();
+        byte[] il = method.GetMethodBody()!.GetILAsByteArray()!;
+        int pc = 0;
+        while (pc < il.Length)
+        {
+            short value = il[pc] == 0xFE ? unchecked((short)(0xFE00 | il[pc + 1])) : il[pc];
+            pc += il[pc] == 0xFE ? 2 : 1;
+            var op = OpCodesByValue[value];
+            if (op == OpCodes.Isinst) found.Add(method.Module.ResolveType(BitConverter.ToInt32(il, pc)));
+            pc += OperandSize(op.OperandType, il, pc);
+        }
+        return found;
+    }
+
+    [Fact]
     public void TheWalkerFindsStringBuilding()
     {
         // The walker itself: a method that builds an interpolated string in line is found.
