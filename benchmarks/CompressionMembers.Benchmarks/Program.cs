@@ -1,4 +1,9 @@
 using BenchmarkDotNet.Running;
 
 // Run: dotnet run -c Release --project benchmarks/CompressionMembers.Benchmarks -- --filter '*' --job short
+// A second opinion without BenchmarkDotNet's engine (PlainLoop.cs):
+//      dotnet run -c Release --project benchmarks/CompressionMembers.Benchmarks -- --plain-loop Fire Ec5Bending --processes 6
+if (args.Length > 0 && args[0] == "--plain-loop")
+    return CompressionMembers.Benchmarks.PlainLoop.Run(args[1..]);
 BenchmarkSwitcher.FromAssembly(typeof(CompressionMembers.Benchmarks.MethodBenchmarks).Assembly).Run(args);
+return 0;
