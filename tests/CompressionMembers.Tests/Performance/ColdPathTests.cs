@@ -46,27 +46,22 @@ public class ColdPathTests
 
     [Theory]
     [MemberData(nameof(BuiltInMethods))]
-    public void AppliesTo_BuildsNoSentenceInLine(string typeName)
-    {
-        var type = typeof(IResistanceMethod).Assembly.GetType(typeName)!;
-        var appliesTo = type.GetMethod(nameof(IResistanceMethod.AppliesTo), BindingFlags.Public | BindingFlags.Instance)!;
-        var found = new List<string>();
-        Walk(appliesTo, appliesTo.Name, found, new HashSet<MethodBase>(), depth: 0);
-        Assert.True(found.Count == 0,
-            $"{type.Name}.AppliesTo builds strings in line (move the sentence into a [MethodImpl(MethodImplOptions.NoInlining)] method):\n  "
-            + string.Join("\n  ", found));
-    }
+    public void AppliesTo_BuildsNoSentenceInLine(string typeName) =>
+        AssertBuildsNoStringInLine(typeName, nameof(IResistanceMethod.AppliesTo), "move the sentence into");
 
     [Theory]
     [MemberData(nameof(BuiltInMethods))]
-    public void Evaluate_BuildsNoStringInLine(string typeName)
+    public void Evaluate_BuildsNoStringInLine(string typeName) =>
+        AssertBuildsNoStringInLine(typeName, nameof(IResistanceMethod.Evaluate), "trace writing belongs in");
+
+    private static void AssertBuildsNoStringInLine(string typeName, string methodName, string advice)
     {
         var type = typeof(IResistanceMethod).Assembly.GetType(typeName)!;
-        var evaluate = type.GetMethod(nameof(IResistanceMethod.Evaluate), BindingFlags.Public | BindingFlags.Instance)!;
+        var method = type.GetMethod(methodName, BindingFlags.Public | BindingFlags.Instance)!;
         var found = new List<string>();
-        Walk(evaluate, evaluate.Name, found, new HashSet<MethodBase>(), depth: 0);
+        Walk(method, method.Name, found, new HashSet<MethodBase>(), depth: 0);
         Assert.True(found.Count == 0,
-            $"{type.Name}.Evaluate builds strings in line (trace writing belongs in a [MethodImpl(MethodImplOptions.NoInlining)] method):\n  "
+            $"{type.Name}.{methodName} builds strings in line ({advice} a [MethodImpl(MethodImplOptions.NoInlining)] method):\n  "
             + string.Join("\n  ", found));
     }
 
@@ -92,16 +87,23 @@ public class ColdPathTests
     {
         var found = new HashSet<Type>();
         byte[] il = method.GetMethodBody()!.GetILAsByteArray()!;
+        foreach (var (op, operand) in Instructions(il))
+            if (op == OpCodes.Isinst || op == OpCodes.Castclass) found.Add(method.Module.ResolveType(BitConverter.ToInt32(il, operand)));
+        return found;
+    }
+
+    // Each instruction of a method body: its opcode and where its operand starts.
+    private static IEnumerable<(OpCode Op, int Operand)> Instructions(byte[] il)
+    {
         int pc = 0;
         while (pc < il.Length)
         {
             short value = il[pc] == 0xFE ? unchecked((short)(0xFE00 | il[pc + 1])) : il[pc];
             pc += il[pc] == 0xFE ? 2 : 1;
             var op = OpCodesByValue[value];
-            if (op == OpCodes.Isinst || op == OpCodes.Castclass) found.Add(method.Module.ResolveType(BitConverter.ToInt32(il, pc)));
+            yield return (op, pc);
             pc += OperandSize(op.OperandType, il, pc);
         }
-        return found;
     }
 
     [Fact]
@@ -125,21 +127,14 @@ public class ColdPathTests
         var module = method.Module;
         Type[]? typeArgs = method.DeclaringType is { IsGenericType: true } dt ? dt.GetGenericArguments() : null;
         Type[]? methodArgs = method.IsGenericMethod ? method.GetGenericArguments() : null;
-        int pc = 0;
-        while (pc < il.Length)
+        foreach (var (op, operand) in Instructions(il))
         {
-            short value = il[pc] == 0xFE ? unchecked((short)(0xFE00 | il[pc + 1])) : il[pc];
-            pc += il[pc] == 0xFE ? 2 : 1;
-            var op = OpCodesByValue[value];
-            if (op.OperandType == OperandType.InlineMethod)
-            {
-                var callee = module.ResolveMethod(BitConverter.ToInt32(il, pc), typeArgs, methodArgs)!;
-                string name = $"{callee.DeclaringType?.Name}.{callee.Name}";
-                if (BuildsString(callee)) found.Add($"{path} → {name}");
-                else if (callee.Module == typeof(IResistanceMethod).Module && Inlinable(callee))
-                    Walk(callee, $"{path} → {name}", found, seen, depth + 1);
-            }
-            pc += OperandSize(op.OperandType, il, pc);
+            if (op.OperandType != OperandType.InlineMethod) continue;
+            var callee = module.ResolveMethod(BitConverter.ToInt32(il, operand), typeArgs, methodArgs)!;
+            string name = $"{callee.DeclaringType?.Name}.{callee.Name}";
+            if (BuildsString(callee)) found.Add($"{path} → {name}");
+            else if (callee.Module == typeof(IResistanceMethod).Module && Inlinable(callee))
+                Walk(callee, $"{path} → {name}", found, seen, depth + 1);
         }
     }
 
