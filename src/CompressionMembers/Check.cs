@@ -1,4 +1,5 @@
 using System;
+using System.Diagnostics;
 using System.Runtime.CompilerServices;
 using CompressionMembers.Actions;
 using CompressionMembers.Members;
@@ -94,7 +95,8 @@ public static class Check
             case Ec5FireReducedSection m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
             case NdsColumnStability m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
             case Eurocode9Compression m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
-            default: if ((verdict = ((BucklingConstantMethod)method).AppliesTo(rm, ra)).IsApplicable) return ((BucklingConstantMethod)method).Evaluate(rm, ra, trace); break;
+            case BucklingConstantMethod m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            default: throw new UnreachableException();   // the type test above admitted only these five
         }
         return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
     }
