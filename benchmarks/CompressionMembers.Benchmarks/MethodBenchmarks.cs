@@ -203,6 +203,7 @@ public class MethodBenchmarks
     // EN 1995-1-1 6.3.2: C24 (fc,0,k = 21 MPa, E0,05 = 7400 MPa), kmod = 0.8 (service class 1, medium-term), γM = 1.3, βc = 0.2.
     private const double Fc0k = 21e6, E005 = 7400e6, Fmk = 24e6, Fc0d = 0.8 * Fc0k / 1.3;
     private static readonly double Root = Math.Sqrt(Fc0k / E005);
+    private static readonly double Sqrt12 = Math.Sqrt(12);
 
     private static double Kc(double lr)
     {
@@ -258,7 +259,7 @@ public class MethodBenchmarks
         const double fd = 1.25 * Fc0k, e20 = 1.25 * E005, def = 0.8 / 60000.0 * 1800 + 0.007;
         double b = _b[i] + 0.05 - 2 * def, h = _h[i] + 0.05 - 2 * def, l = _l[i], a = b * h;
         double iy = b * h * h * h / 12, iz = h * b * b * b / 12;
-        double ly = l / Math.Sqrt(iy / a), lz = l / Math.Sqrt(iz / a);
+        double ly = l * Sqrt12 / h, lz = l * Sqrt12 / b;      // i = √(I / A) = side / √12 for the residual rectangle
         double lrY = ly / Math.PI * Root, lrZ = lz / Math.PI * Root;
         double kcY = Kc(lrY), kcZ = Kc(lrZ);
         double ny = Math.PI * Math.PI * e20 * iy / (l * l), nz = Math.PI * Math.PI * e20 * iz / (l * l);

@@ -94,14 +94,17 @@ public class FastPathEquivalenceTests
     [Fact]
     public void Ec5FireCompression_RandomMembers_SameAsGeneralPathTracedAndUntraced()
     {
-        Gen.Select(Gen.Double[60, 400], Gen.Double[60, 600], Gen.Double[500, 8000], Gen.Int[0, Classes.Length - 1], Gen.Double[5, 120], Gen.Int[0, 2])
-            .Sample((b, h, l, ci, minutes, exposure) =>
+        // γM,fi both at its recommended 1.0 (the compression path skips that exact division) and at a national-annex value.
+        Gen.Select(Gen.Double[60, 400], Gen.Double[60, 600], Gen.Double[500, 8000], Gen.Int[0, Classes.Length - 1], Gen.Double[5, 120], Gen.Int[0, 2],
+                Gen.Bool)
+            .Sample((b, h, l, ci, minutes, exposure, annexGamma) =>
             {
                 var member = Member.Create(new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h)), Classes[ci],
                     Length.FromMillimeters(l), Restraint.PinnedBothAxes);
                 var actions = DesignActions.Compression(Force.FromKilonewtons(20)).WithLoadDuration(LoadDurationClass.Instantaneous);
                 // Three-sided exposure without the centroid-shift moment is pure compression too.
-                var method = new Ec5FireReducedSection(Duration.FromMinutes(minutes), (FireExposure)exposure, includeCentroidShift: exposure == 0);
+                var method = new Ec5FireReducedSection(Duration.FromMinutes(minutes), (FireExposure)exposure, annexGamma ? 1.15 : 1.0,
+                    includeCentroidShift: exposure == 0);
                 return SameBits(method.Evaluate(member.Resolved, actions.Resolved, null), method.EvaluateGeneral(member.Resolved, actions.Resolved, null))
                     && SameBits(method.Evaluate(member.Resolved, actions.Resolved, new CalculationTrace()),
                         method.EvaluateGeneral(member.Resolved, actions.Resolved, new CalculationTrace()));

@@ -31,6 +31,20 @@ public class Ec5FireReducedSectionTests
     }
 
     [Fact]
+    public void ResidualSlenderness_AnyRectangle_IsLefOverTheRadiusOfGyration()
+    {
+        // λ = Lef / i with i = √(I / A): for a rectangle I = b h³ / 12 and A = b h, so i = h / √12 (the rectangle's radius of
+        // gyration; common practice, in every strength-of-materials table). The method forms Lef √12 / h; it must agree
+        // with √(I / A) computed the long way to rounding (a few ulp).
+        Gen.Select(Gen.Double[0.005, 2.0], Gen.Double[0.005, 2.0], Gen.Double[0.1, 30.0]).Sample((b, h, lef) =>
+        {
+            double i = Math.Sqrt(b * h * h * h / 12 / (b * h));
+            double expected = lef / i, actual = Ec5FireReducedSection.ResidualSlenderness(lef, h);
+            return Math.Abs(actual - expected) <= 1e-15 * 4 * expected;
+        }, seed: Trust.PropertyTests.Seed);
+    }
+
+    [Fact]
     public void EffectiveDepth_Before20Minutes_UsesK0OfTimeOver20()
     {
         // EN 1995-1-2 Table 4.1: k0 = t/20 for t < 20 min; def = βn t + k0 d0, d0 = 7 mm.
