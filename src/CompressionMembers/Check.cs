@@ -80,6 +80,11 @@ public static class Check
     // classes) are therefore recognised by a type test and called directly. The classical methods stay on the interface
     // path, written first so that the JIT spends its inlining budget there first: their short checks gain most from
     // being inlined whole into the caller's loop, and a type switch over every method left them as calls.
+    //
+    // The straight-line paths of those five methods write their numbers (CheckNumbers: no references) and the result is
+    // built here, once for all five, inlined into the caller: a method that returned the 240-byte result built it in a
+    // zeroed temporary and copied it over, which cost a fire check about a fifth of its time (docs/performance.md, third
+    // round). The general paths of EN 1995-1-2 and EN 1999-1-1 return their result themselves (OtherPath).
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static CheckResult Run(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace)
     {
@@ -89,17 +94,32 @@ public static class Check
             if ((verdict = method.AppliesTo(rm, ra)).IsApplicable) return method.Evaluate(rm, ra, trace);
             return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
         }
+        // Each case: the applicability test, then the method's numbers (null: a path that returns its result itself).
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string? check;
         switch (method)
         {
-            case Ec5ColumnStability m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
-            case Ec5FireReducedSection m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
-            case NdsColumnStability m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
-            case Eurocode9Compression m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
-            case BucklingConstantMethod m: if ((verdict = m.AppliesTo(rm, ra)).IsApplicable) return m.Evaluate(rm, ra, trace); break;
+            case Ec5ColumnStability m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case Ec5FireReducedSection m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case NdsColumnStability m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case Eurocode9Compression m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case BucklingConstantMethod m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
             default: throw new UnreachableException();   // the type test above admitted only these five
         }
-        return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
+        if (!verdict.IsApplicable) return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
+        return check is not null ? numbers.ToResult(rm, ra, method, check, trace) : OtherPath(rm, ra, method, trace);
     }
+
+    // The paths that return their result themselves: EN 1995-1-2 with moments or with the section burnt away, and
+    // EN 1999-1-1 with welds, open sections or bending (the general paths, which write their records).
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static CheckResult OtherPath(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace) =>
+        method switch
+        {
+            Ec5FireReducedSection m => m.EvaluateGeneral(rm, ra, trace),
+            Eurocode9Compression m => m.EvaluateGeneral(rm, ra, trace),
+            _ => throw new UnreachableException(),   // the other three always give their numbers
+        };
 
     [MethodImpl(MethodImplOptions.NoInlining)]
     private static CheckResult ThrowNotApplicable(IResistanceMethod method, Member member, string reason) =>

@@ -61,12 +61,37 @@ public readonly struct CheckResult
         AboutZ = aboutZ;
         Torsional = torsional;
         Steps = trace is null ? NoSteps : trace.Steps;
-        if (!(designResistanceN >= 0) || double.IsPositiveInfinity(designResistanceN) || !(utilisation >= 0))
-            ThrowBroken(method, member.Member, designResistanceN, utilisation);
+        if (IsBroken(designResistanceN, utilisation)) ThrowBroken(method, member.Member, designResistanceN, utilisation);
     }
 
+    // From the numbers of a built-in method's straight-line path, which checked them with IsBroken before returning them
+    // (CheckNumbers.Validate), so that no call sits between the numbers and the caller's use of the result.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal CheckResult(in ResolvedMember member, in ResolvedActions actions, IResistanceMethod method, in CheckNumbers numbers,
+        string governingCheck, CalculationTrace? trace)
+    {
+        Member = member.Member;
+        Actions = actions.Actions;
+        Method = method;
+        DesignResistanceN = numbers.DesignResistanceN;
+        Utilisation = numbers.Utilisation;
+        GoverningAxis = numbers.GoverningAxis;
+        GoverningMode = numbers.GoverningMode;
+        GoverningCheck = governingCheck;
+        AboutY = numbers.AboutY;
+        AboutZ = numbers.AboutZ;
+        Torsional = numbers.Torsional;
+        Steps = trace is null ? NoSteps : trace.Steps;
+    }
+
+    /// <summary>Whether a resistance and utilisation are those of a broken method: the resistance negative, NaN or
+    /// infinite, or the utilisation negative or NaN.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static bool IsBroken(double designResistanceN, double utilisation) =>
+        !(designResistanceN >= 0) || double.IsPositiveInfinity(designResistanceN) || !(utilisation >= 0);
+
     [MethodImpl(MethodImplOptions.NoInlining)]
-    private static void ThrowBroken(IResistanceMethod method, Member member, double resistanceN, double utilisation) =>
+    internal static void ThrowBroken(IResistanceMethod method, Member member, double resistanceN, double utilisation) =>
         throw new InvalidOperationException(string.Create(CultureInfo.InvariantCulture,
             $"{method?.Identity.Name ?? "A method"} returned resistance {resistanceN} N and utilisation {utilisation} for \"{member?.Name}\": a method must return a finite, non-negative resistance and a utilisation that is neither negative nor NaN."));
 

@@ -60,7 +60,7 @@ public class FastPathEquivalenceTests
     }
 
     /// <summary>Every number two results carry, bit for bit, and the same words and steps.</summary>
-    private static bool SameBits(in CheckResult a, in CheckResult b)
+    internal static bool SameBits(in CheckResult a, in CheckResult b)
     {
         static bool Axis(in AxisOutcome x, in AxisOutcome y) => x.IsEvaluated == y.IsEvaluated && x.EffectiveLengthM.Equals(y.EffectiveLengthM)
             && x.Slenderness.Equals(y.Slenderness) && x.RelativeSlenderness.Equals(y.RelativeSlenderness) && x.CriticalForceN.Equals(y.CriticalForceN)

@@ -125,6 +125,16 @@ public sealed class BucklingConstantMethod : IResistanceMethod
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = Numbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The check's numbers (validated); returns the governing check's words. <see cref="Check"/> calls it and
+    /// builds the result itself.</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    {
         var alloy = (AluminiumAlloy)member.Member.Material;
         bool aged = Group == TemperGroup.ArtificiallyAged || (Group == TemperGroup.FromAlloy && alloy.IsArtificiallyAged);
         double fcy = member.StrengthPa, e = member.ElasticModulusPa, a = member.AreaM2;
@@ -141,12 +151,15 @@ public sealed class BucklingConstantMethod : IResistanceMethod
         double capacity = factor * fc * a;
         double u = actions.AxialForceN / capacity;
         if (trace is not null) TraceSteps(trace, member, actions, alloy, aged, bc, dc, cc, y, z, by, bz, fy, fz, capacity, u);
-        return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z,
-            branch == 0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling,
-            branch == 0 ? CheckYield : branch == 1 ? CheckInelastic : CheckElastic,
-            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.Slenderness / cc, y.CriticalForceN, fy / fcy, factor * fy * a),
-            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.Slenderness / cc, z.CriticalForceN, fz / fcy, factor * fz * a),
-            default, trace);
+        numbers.DesignResistanceN = capacity;
+        numbers.Utilisation = u;
+        numbers.GoverningAxis = govY ? BucklingAxis.Y : BucklingAxis.Z;
+        numbers.GoverningMode = branch == 0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
+        numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.Slenderness / cc, y.CriticalForceN, fy / fcy, factor * fy * a);
+        numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.Slenderness / cc, z.CriticalForceN, fz / fcy, factor * fz * a);
+        numbers.Torsional = default;
+        numbers.Validate(this, member);
+        return branch == 0 ? CheckYield : branch == 1 ? CheckInelastic : CheckElastic;
     }
 
     // The steps, written by a separate, non-inlined method from the values computed, so that the untraced check carries

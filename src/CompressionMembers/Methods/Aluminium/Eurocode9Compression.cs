@@ -159,14 +159,33 @@ public sealed class Eurocode9Compression : IResistanceMethod
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
-        Welding.Location == WeldLocation.None && !IsOpenForTorsion(member.SectionKind) && !(actions.HasEccentricity || actions.HasEndMoments)
-            ? EvaluateFlexural(member, actions, trace)
-            : EvaluateGeneral(member, actions, trace);
+        IsFlexuralOnly(member, actions) ? EvaluateFlexural(member, actions, trace) : EvaluateGeneral(member, actions, trace);
+
+    /// <summary>Whether the straight-line path applies (an unwelded closed or solid section in compression);
+    /// <see cref="Check"/> then calls <see cref="FlexuralNumbers"/> and builds the result itself.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal bool IsFlexuralOnly(in ResolvedMember member, in ResolvedActions actions) =>
+        Welding.Location == WeldLocation.None && !IsOpenForTorsion(member.SectionKind) && !(actions.HasEccentricity || actions.HasEndMoments);
 
     // An unwelded closed or solid section in compression: flexural buckling about both axes only (6.3.1.1, 6.3.1.2), straight
     // on the member's resolved values — the path of sweeps. It writes the same steps in the same order as the general path,
     // and a test holds the two bit for bit; the traced and untraced checks both take it.
     private CheckResult EvaluateFlexural(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = FlexuralNumbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The straight-line path's numbers, or null for welds, open sections and bending (then
+    /// <see cref="EvaluateGeneral"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        IsFlexuralOnly(member, actions) ? FlexuralNumbers(member, actions, trace, ref numbers) : null;
+
+    /// <summary>The straight-line path's numbers (validated); returns the governing check's words.</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    internal string FlexuralNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
     {
         var alloy = (AluminiumAlloy)member.Member.Material;
         var entry = Ec9ClassificationCache.Get(member.Member.Section, alloy, false);
@@ -193,10 +212,15 @@ public sealed class Eurocode9Compression : IResistanceMethod
             TraceAxial(trace, nRd, check, nEd, u);
             trace.Add("u", "utilisation", "governing value", u, StepUnit.None, Std);
         }
-        return new CheckResult(member, actions, this, nRd, u, axis, mode, check,
-            new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lamY, member.CriticalForceYN, chiY * 1.0, nRdY),
-            new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lamZ, member.CriticalForceZN, chiZ * 1.0, nRdZ),
-            default, trace);
+        numbers.DesignResistanceN = nRd;
+        numbers.Utilisation = u;
+        numbers.GoverningAxis = axis;
+        numbers.GoverningMode = mode;
+        numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lamY, member.CriticalForceYN, chiY * 1.0, nRdY);
+        numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lamZ, member.CriticalForceZN, chiZ * 1.0, nRdZ);
+        numbers.Torsional = default;
+        numbers.Validate(this, member);
+        return check;
     }
 
     [MethodImpl(MethodImplOptions.NoInlining)]

@@ -189,12 +189,32 @@ public sealed class Ec5ColumnStability : IResistanceMethod
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
-        actions.HasEccentricity || actions.HasEndMoments ? EvaluateWithBending(member, actions, trace) : EvaluateCompression(member, actions, trace);
+        IsPureCompression(actions) ? EvaluateCompression(member, actions, trace) : EvaluateWithBending(member, actions, trace);
+
+    /// <summary>Whether the straight-line compression path applies (no eccentricity, no end moments); <see cref="Check"/>
+    /// then calls <see cref="CompressionNumbers"/> and builds the result itself.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static bool IsPureCompression(in ResolvedActions actions) => !(actions.HasEccentricity || actions.HasEndMoments);
 
     // Pure compression (6.2 in the stocky range, 6.23/6.24 without moments), straight on the member's resolved values: the
     // path of parametric sweeps, so it marshals nothing through the kernel records. The traced and untraced checks both
     // take it (tracing never changes the path), and a test holds it bit for bit to Ec5Kernel.Run on the same member.
     private CheckResult EvaluateCompression(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = CompressionNumbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The check's numbers (validated), by the straight-line compression path or with bending; returns the
+    /// governing check's words. <see cref="Check"/> calls it and builds the result itself.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        IsPureCompression(actions) ? CompressionNumbers(member, actions, trace, ref numbers) : BendingNumbers(member, actions, trace, ref numbers);
+
+    /// <summary>The compression path's numbers (validated); returns the governing check's words.</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    internal string CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
     {
         var mat = (TimberMaterial)member.Member.Material;
         double kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
@@ -210,11 +230,15 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         if (trace is not null)
             TraceCompression(trace, member, actions, mat, kmod, gammaM, lrY, lrZ, kY, kZ, kcY, kcZ, fc0d, sigma, uY, uZ, aboutY, u, resistance);
         double kcGov = aboutY ? kcY : kcZ;
-        return new CheckResult(member, actions, this, resistance, u, aboutY ? BucklingAxis.Y : BucklingAxis.Z,
-            kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling, Ec5Kernel.CompressionCheckName(aboutY, aboutY ? lrY : lrZ),
-            new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lrY, member.CriticalForceYN, kcY, kcY * fc0d * member.AreaM2),
-            new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lrZ, member.CriticalForceZN, kcZ, kcZ * fc0d * member.AreaM2),
-            default, trace);
+        numbers.DesignResistanceN = resistance;
+        numbers.Utilisation = u;
+        numbers.GoverningAxis = aboutY ? BucklingAxis.Y : BucklingAxis.Z;
+        numbers.GoverningMode = kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
+        numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lrY, member.CriticalForceYN, kcY, kcY * fc0d * member.AreaM2);
+        numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lrZ, member.CriticalForceZN, kcZ, kcZ * fc0d * member.AreaM2);
+        numbers.Torsional = default;
+        numbers.Validate(this, member);
+        return Ec5Kernel.CompressionCheckName(aboutY, aboutY ? lrY : lrZ);
     }
 
     // The kernel records of the compression path, rebuilt from the values it computed, for the shared trace writer.
@@ -239,12 +263,20 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     }
 
     // Compression with bending: the shared kernel (6.19/6.20 or 6.23/6.24, and 6.35), also used by the fire method.
+    internal CheckResult EvaluateWithBending(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = BendingNumbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The numbers of compression with bending (validated); returns the governing check's words.</summary>
     // Not inlined: a large path (the general kernel and its records). Inlined into a caller's loop by profile-guided
     // inlining, it used up the caller's inlining budget, so that the result's constructors and the caller's own code were
     // left as calls with 240-byte copies (measured: EN 1995-1-1 with bending went from 1.1x to 1.8-2.2x the hand-written
     // loop; docs/performance.md).
     [MethodImpl(MethodImplOptions.NoInlining)]
-    internal CheckResult EvaluateWithBending(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    internal string BendingNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
     {
         var mat = (TimberMaterial)member.Member.Material;
         var i = default(Ec5Input);
@@ -275,11 +307,15 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         if (trace is not null) WriteTrace(trace, member, actions, mat, i, o);
 
         double ncrY = member.CriticalForceYN, ncrZ = member.CriticalForceZN;   // π² E0,05 I / Lef², resolved with the member
-        return new CheckResult(member, actions, this, o.ResistanceN, o.Utilisation, Ec5Kernel.Axis(o), Ec5Kernel.Mode(o), Ec5Kernel.CheckName(o),
-            new AxisOutcome(i.LefYM, o.LambdaY, o.LambdaRelY, ncrY, o.KcY, o.KcY * o.Fc0dPa * i.AreaM2),
-            new AxisOutcome(i.LefZM, o.LambdaZ, o.LambdaRelZ, ncrZ, o.KcZ, o.KcZ * o.Fc0dPa * i.AreaM2),
-            o.LtbChecked ? new AxisOutcome(i.LefLtbM, double.NaN, o.LambdaRelM, double.NaN, o.KCrit, double.NaN) : default,
-            trace);
+        numbers.DesignResistanceN = o.ResistanceN;
+        numbers.Utilisation = o.Utilisation;
+        numbers.GoverningAxis = Ec5Kernel.Axis(o);
+        numbers.GoverningMode = Ec5Kernel.Mode(o);
+        numbers.AboutY = new AxisOutcome(i.LefYM, o.LambdaY, o.LambdaRelY, ncrY, o.KcY, o.KcY * o.Fc0dPa * i.AreaM2);
+        numbers.AboutZ = new AxisOutcome(i.LefZM, o.LambdaZ, o.LambdaRelZ, ncrZ, o.KcZ, o.KcZ * o.Fc0dPa * i.AreaM2);
+        numbers.Torsional = o.LtbChecked ? new AxisOutcome(i.LefLtbM, double.NaN, o.LambdaRelM, double.NaN, o.KCrit, double.NaN) : default;
+        numbers.Validate(this, member);
+        return Ec5Kernel.CheckName(o);
     }
 
     [MethodImpl(MethodImplOptions.NoInlining)]

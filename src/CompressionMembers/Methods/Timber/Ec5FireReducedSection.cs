@@ -206,20 +206,40 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
-        actions.HasEccentricity || actions.HasEndMoments || (IncludesCentroidShift && Exposure != FireExposure.FourSides)
-            ? EvaluateGeneral(member, actions, trace)
-            : EvaluateCompression(member, actions, trace);
+        IsPureCompression(actions) ? EvaluateCompression(member, actions, trace) : EvaluateGeneral(member, actions, trace);
 
     // Pure compression of the residual section (no eccentricity, no end moments, no centroid shift): straight on scalars
     // with the kernel's compression core, the same operations as the general path (a test holds them bit for bit). The
     // traced and untraced checks both take it.
     private CheckResult EvaluateCompression(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string? check = CompressionNumbers(member, actions, trace, ref numbers);
+        return check is null ? EvaluateGeneral(member, actions, trace) : numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>Whether the straight-line compression path applies (no eccentricity, no end moments, no moment from a
+    /// centroid shift); <see cref="Check"/> then calls <see cref="CompressionNumbers"/> and builds the result itself.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal bool IsPureCompression(in ResolvedActions actions) =>
+        !(actions.HasEccentricity || actions.HasEndMoments || (IncludesCentroidShift && Exposure != FireExposure.FourSides));
+
+    /// <summary>The straight-line path's numbers, or null with moments or once the section has burnt away (then
+    /// <see cref="EvaluateGeneral"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        IsPureCompression(actions) ? CompressionNumbers(member, actions, trace, ref numbers) : null;
+
+    /// <summary>The compression path's numbers; returns the governing check's words, or null when the residual section has
+    /// burnt away (the general path reports that).</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    internal string? CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    {
         var mat = (TimberMaterial)member.Member.Material;
         TimberRules.Dimensions(member, out double b, out double h);
         double def = EffectiveDepth(_tReqS, BetaN(mat));
         Residual(Exposure, b, h, def, out double bFi, out double hFi, out _, out _);
-        if (!(bFi > 0) || !(hFi > 0)) return EvaluateGeneral(member, actions, trace);   // burnt away: the general path says so
+        if (!(bFi > 0) || !(hFi > 0)) return null;
         double a = bFi * hFi, iy = bFi * hFi * hFi * hFi / 12, iz = hFi * bFi * bFi * bFi / 12;
         double lefY = member.EffectiveLengthYM, lefZ = member.EffectiveLengthZM;
         double lamY = ResidualSlenderness(lefY, hFi), lamZ = ResidualSlenderness(lefZ, bFi);   // the residual section's slenderness
@@ -236,11 +256,15 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         if (trace is not null)
             TraceCompression(trace, member, actions, mat, def, bFi, hFi, lamY, lamZ, lrY, lrZ, kY, kZ, kcY, kcZ, fd, sigma, uY, uZ, aboutY, resistance);
         double kcGov = aboutY ? kcY : kcZ;
-        return new CheckResult(member, actions, this, resistance, Math.Max(uY, uZ), aboutY ? BucklingAxis.Y : BucklingAxis.Z,
-            kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling, aboutY ? CheckCompressionY : CheckCompressionZ,
-            new AxisOutcome(lefY, lamY, lrY, Math.PI * Math.PI * e20 * iy / (lefY * lefY), kcY, kcY * fd * a),
-            new AxisOutcome(lefZ, lamZ, lrZ, Math.PI * Math.PI * e20 * iz / (lefZ * lefZ), kcZ, kcZ * fd * a),
-            default, trace);
+        numbers.DesignResistanceN = resistance;
+        numbers.Utilisation = Math.Max(uY, uZ);
+        numbers.GoverningAxis = aboutY ? BucklingAxis.Y : BucklingAxis.Z;
+        numbers.GoverningMode = kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
+        numbers.AboutY = new AxisOutcome(lefY, lamY, lrY, Math.PI * Math.PI * e20 * iy / (lefY * lefY), kcY, kcY * fd * a);
+        numbers.AboutZ = new AxisOutcome(lefZ, lamZ, lrZ, Math.PI * Math.PI * e20 * iz / (lefZ * lefZ), kcZ, kcZ * fd * a);
+        numbers.Torsional = default;
+        numbers.Validate(this, member);
+        return aboutY ? CheckCompressionY : CheckCompressionZ;
     }
 
     // The kernel records rebuilt from the values the compression path computed, for the shared trace writer.

@@ -270,6 +270,16 @@ public sealed class NdsColumnStability : IResistanceMethod
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = Numbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The check's numbers (validated); returns the governing check's words. <see cref="Check"/> calls it and
+    /// builds the result itself.</summary>
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    {
         var mat = (NdsTimberMaterial)member.Member.Material;
         var adj = Adjustments;
         bool asd = Format == NdsDesignFormat.Asd;
@@ -342,11 +352,15 @@ public sealed class NdsColumnStability : IResistanceMethod
 
         var axis = bending ? (fb1 > 0 && fb2 > 0 ? BucklingAxis.Both : fb1 > 0 ? BucklingAxis.Y : BucklingAxis.Z) : (govY ? BucklingAxis.Y : BucklingAxis.Z);
         var mode = bending ? FailureMode.CombinedCompressionAndBending : FailureMode.FlexuralBuckling;
-        string check = bending ? "NDS 2018 15.4.1 (15.4-1): eccentric axial compression, 3.9.2 interaction" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
-        return new CheckResult(member, actions, this, fcP * area, u, axis, mode, check,
-            new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, double.NaN, fcE1 * area, cpY, fcStar * cpY * area),
-            new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, double.NaN, fcE2 * area, cpZ, fcStar * cpZ * area),
-            ltb ? new AxisOutcome(le, rb, double.NaN, double.NaN, cl, double.NaN) : default, trace);
+        numbers.DesignResistanceN = fcP * area;
+        numbers.Utilisation = u;
+        numbers.GoverningAxis = axis;
+        numbers.GoverningMode = mode;
+        numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, double.NaN, fcE1 * area, cpY, fcStar * cpY * area);
+        numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, double.NaN, fcE2 * area, cpZ, fcStar * cpZ * area);
+        numbers.Torsional = ltb ? new AxisOutcome(le, rb, double.NaN, double.NaN, cl, double.NaN) : default;
+        numbers.Validate(this, member);
+        return bending ? "NDS 2018 15.4.1 (15.4-1): eccentric axial compression, 3.9.2 interaction" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
     }
 
     [MethodImpl(MethodImplOptions.NoInlining)]
