@@ -158,24 +158,18 @@ public sealed class Eurocode9Compression : IResistanceMethod
         $"the heat-affected area of the longitudinal welds ({Guard.Show(Welding.HeatAffectedAreaM2 * 1e6)} mm²) is not less than the section's area ({Guard.Show(areaM2 * 1e6)} mm²); check the weld layout.");
 
     /// <inheritdoc/>
-    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
-        IsFlexuralOnly(member, actions) ? EvaluateFlexural(member, actions, trace) : EvaluateGeneral(member, actions, trace);
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string? check = Numbers(member, actions, trace, ref numbers);
+        return check is null ? EvaluateGeneral(member, actions, trace) : numbers.ToResult(member, actions, this, check, trace);
+    }
 
     /// <summary>Whether the straight-line path applies (an unwelded closed or solid section in compression);
-    /// <see cref="Check"/> then calls <see cref="FlexuralNumbers"/> and builds the result itself.</summary>
+    /// <see cref="Numbers"/> then takes <see cref="FlexuralNumbers"/>.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal bool IsFlexuralOnly(in ResolvedMember member, in ResolvedActions actions) =>
         Welding.Location == WeldLocation.None && !IsOpenForTorsion(member.SectionKind) && !(actions.HasEccentricity || actions.HasEndMoments);
-
-    // An unwelded closed or solid section in compression: flexural buckling about both axes only (6.3.1.1, 6.3.1.2), straight
-    // on the member's resolved values — the path of sweeps. It writes the same steps in the same order as the general path,
-    // and a test holds the two bit for bit; the traced and untraced checks both take it.
-    private CheckResult EvaluateFlexural(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
-    {
-        Unsafe.SkipInit(out CheckNumbers numbers);
-        string check = FlexuralNumbers(member, actions, trace, ref numbers);
-        return numbers.ToResult(member, actions, this, check, trace);
-    }
 
     /// <summary>The straight-line path's numbers, or null for welds, open sections and bending (then
     /// <see cref="EvaluateGeneral"/>).</summary>
@@ -184,6 +178,9 @@ public sealed class Eurocode9Compression : IResistanceMethod
         IsFlexuralOnly(member, actions) ? FlexuralNumbers(member, actions, trace, ref numbers) : null;
 
     /// <summary>The straight-line path's numbers (validated); returns the governing check's words.</summary>
+    // An unwelded closed or solid section in compression: flexural buckling about both axes only (6.3.1.1, 6.3.1.2), straight
+    // on the member's resolved values — the path of sweeps. It writes the same steps in the same order as the general path,
+    // and a test holds the two bit for bit; the traced and untraced checks both take it.
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal string FlexuralNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
     {
@@ -234,10 +231,8 @@ public sealed class Eurocode9Compression : IResistanceMethod
 
     /// <summary>Every mode: flexural, torsional and flexural-torsional buckling, welds (HAZ), the welded cross-section, and
     /// compression with bending.</summary>
-    // Not inlined: a large path (the general kernel and its records). Inlined into a caller's loop by profile-guided
-    // inlining, it used up the caller's inlining budget, so that the result's constructors and the caller's own code were
-    // left as calls with 240-byte copies (measured: EN 1995-1-1 with bending went from 1.1x to 1.8-2.2x the hand-written
-    // loop; docs/performance.md).
+    // Not inlined, for the reason given at Ec5ColumnStability.BendingNumbers (a large path pulled into a caller's loop
+    // spends the caller's inlining budget).
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal CheckResult EvaluateGeneral(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {

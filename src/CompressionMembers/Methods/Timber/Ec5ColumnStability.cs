@@ -188,23 +188,17 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     }
 
     /// <inheritdoc/>
-    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
-        IsPureCompression(actions) ? EvaluateCompression(member, actions, trace) : EvaluateWithBending(member, actions, trace);
-
-    /// <summary>Whether the straight-line compression path applies (no eccentricity, no end moments); <see cref="Check"/>
-    /// then calls <see cref="CompressionNumbers"/> and builds the result itself.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    internal static bool IsPureCompression(in ResolvedActions actions) => !(actions.HasEccentricity || actions.HasEndMoments);
-
-    // Pure compression (6.2 in the stocky range, 6.23/6.24 without moments), straight on the member's resolved values: the
-    // path of parametric sweeps, so it marshals nothing through the kernel records. The traced and untraced checks both
-    // take it (tracing never changes the path), and a test holds it bit for bit to Ec5Kernel.Run on the same member.
-    private CheckResult EvaluateCompression(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         Unsafe.SkipInit(out CheckNumbers numbers);
-        string check = CompressionNumbers(member, actions, trace, ref numbers);
+        string check = Numbers(member, actions, trace, ref numbers);
         return numbers.ToResult(member, actions, this, check, trace);
     }
+
+    /// <summary>Whether the straight-line compression path applies (no eccentricity, no end moments); <see cref="Numbers"/>
+    /// then takes <see cref="CompressionNumbers"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static bool IsPureCompression(in ResolvedActions actions) => !(actions.HasEccentricity || actions.HasEndMoments);
 
     /// <summary>The check's numbers (validated), by the straight-line compression path or with bending; returns the
     /// governing check's words. <see cref="Check"/> calls it and builds the result itself.</summary>
@@ -213,6 +207,9 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         IsPureCompression(actions) ? CompressionNumbers(member, actions, trace, ref numbers) : BendingNumbers(member, actions, trace, ref numbers);
 
     /// <summary>The compression path's numbers (validated); returns the governing check's words.</summary>
+    // Pure compression (6.2 in the stocky range, 6.23/6.24 without moments), straight on the member's resolved values: the
+    // path of parametric sweeps, so it marshals nothing through the kernel records. The traced and untraced checks both
+    // take it (tracing never changes the path), and a test holds it bit for bit to Ec5Kernel.Run on the same member.
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal string CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
     {

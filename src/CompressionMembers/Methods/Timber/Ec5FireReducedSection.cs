@@ -205,21 +205,15 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     }
 
     /// <inheritdoc/>
-    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) =>
-        IsPureCompression(actions) ? EvaluateCompression(member, actions, trace) : EvaluateGeneral(member, actions, trace);
-
-    // Pure compression of the residual section (no eccentricity, no end moments, no centroid shift): straight on scalars
-    // with the kernel's compression core, the same operations as the general path (a test holds them bit for bit). The
-    // traced and untraced checks both take it.
-    private CheckResult EvaluateCompression(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
+    public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         Unsafe.SkipInit(out CheckNumbers numbers);
-        string? check = CompressionNumbers(member, actions, trace, ref numbers);
+        string? check = Numbers(member, actions, trace, ref numbers);
         return check is null ? EvaluateGeneral(member, actions, trace) : numbers.ToResult(member, actions, this, check, trace);
     }
 
     /// <summary>Whether the straight-line compression path applies (no eccentricity, no end moments, no moment from a
-    /// centroid shift); <see cref="Check"/> then calls <see cref="CompressionNumbers"/> and builds the result itself.</summary>
+    /// centroid shift); <see cref="Numbers"/> then takes <see cref="CompressionNumbers"/>.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal bool IsPureCompression(in ResolvedActions actions) =>
         !(actions.HasEccentricity || actions.HasEndMoments || (IncludesCentroidShift && Exposure != FireExposure.FourSides));
@@ -232,6 +226,9 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
 
     /// <summary>The compression path's numbers; returns the governing check's words, or null when the residual section has
     /// burnt away (the general path reports that).</summary>
+    // Pure compression of the residual section (no eccentricity, no end moments, no centroid shift): straight on scalars
+    // with the kernel's compression core, the same operations as the general path (a test holds them bit for bit). The
+    // traced and untraced checks both take it.
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal string? CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
     {
@@ -285,10 +282,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     private const string CheckCompressionY = "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about y";
     private const string CheckCompressionZ = "EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2: residual section, buckling about z";
 
-    // Not inlined: a large path (the general kernel and its records). Inlined into a caller's loop by profile-guided
-    // inlining, it used up the caller's inlining budget, so that the result's constructors and the caller's own code were
-    // left as calls with 240-byte copies (measured: EN 1995-1-1 with bending went from 1.1x to 1.8-2.2x the hand-written
-    // loop; docs/performance.md).
+    // Not inlined, for the reason given at Ec5ColumnStability.BendingNumbers (a large path pulled into a caller's loop
+    // spends the caller's inlining budget).
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal CheckResult EvaluateGeneral(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
