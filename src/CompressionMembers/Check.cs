@@ -100,7 +100,10 @@ public static class Check
         switch (method)
         {
             case Ec5ColumnStability m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
-            case Ec5FireReducedSection m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case Ec5FireReducedSection m:   // tests applicability itself; null goes to OtherPath, which tests it again and says why
+                verdict = default;
+                if ((check = m.ApplicableNumbers(rm, ra, ref numbers)) is not null && trace is not null) m.TraceCompression(trace, rm, ra);
+                break;
             case NdsColumnStability m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
             case Eurocode9Compression m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
             case BucklingConstantMethod m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
@@ -116,7 +119,8 @@ public static class Check
     private static CheckResult OtherPath(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace) =>
         method switch
         {
-            Ec5FireReducedSection m => m.EvaluateGeneral(rm, ra, trace),
+            Ec5FireReducedSection m => m.AppliesTo(rm, ra) is { IsApplicable: false } v
+                ? ThrowNotApplicable(method, rm.Member, v.Reason!) : m.EvaluateGeneral(rm, ra, trace),
             Eurocode9Compression m => m.EvaluateGeneral(rm, ra, trace),
             _ => throw new UnreachableException(),   // the other three always give their numbers
         };

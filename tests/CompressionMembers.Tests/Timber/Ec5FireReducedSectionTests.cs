@@ -176,4 +176,54 @@ public class Ec5FireReducedSectionTests
         Assert.Contains(traced.Steps, s => s.Symbol == "kfi" && s.Value == 1.15);
         Assert.Contains(traced.Steps, s => s.Symbol == "γM,fi" && s.Value == 1.0);
     }
+
+    private static TimberMaterial Declared(string name, TimberProduct product, double rhok)
+    {
+        var c = TimberGrades.C24;
+        return product == TimberProduct.Lvl
+            ? TimberMaterial.Lvl(name, c.CompressionStrength, c.BendingStrength, c.TensionStrength, c.ShearStrength, c.MeanModulus,
+                c.FifthPercentileModulus, c.MeanShearModulus, Density.FromKilogramsPerCubicMeter(rhok), Density.FromKilogramsPerCubicMeter(rhok + 40), 0.15, "test values")
+            : TimberMaterial.Create(name, product, c.CompressionStrength, c.BendingStrength, c.TensionStrength, c.ShearStrength, c.MeanModulus,
+                c.FifthPercentileModulus, c.MeanShearModulus, Density.FromKilogramsPerCubicMeter(rhok), Density.FromKilogramsPerCubicMeter(rhok + 40), "test values");
+    }
+
+    // The method's applicability, restated here from its sources: a European strength class (EN 338 / EN 14080 / LVL, not
+    // US reference values, not another material), a solid rectangle (the reduced cross-section of EN 1995-1-2 4.2.2 is a
+    // rectangle), no initial bow in the actions (EN 1995-1-1 6.3.2 takes it through βc), and a charring rate: given by the
+    // user, or from EN 1995-1-2:2004 Table 3.1, whose rows start at ρk = 290 kg/m³ for solid timber and glulam and at
+    // 480 kg/m³ for LVL. Check takes the straight-line path only for what the method admits and refuses the rest with the
+    // method's own sentence, whatever the combination.
+    [Fact]
+    public void AppliesTo_EveryCombinationOfTheRules_AdmitsExactlyWhatTheRulesAdmit()
+    {
+        (Material Material, bool Covered)[] materials =
+        [
+            (TimberGrades.C24, true), (TimberGrades.GL28h, true), (TimberGrades.D30, true),
+            (Declared("light softwood", TimberProduct.SolidSoftwood, 280), false), (Declared("light hardwood", TimberProduct.SolidHardwood, 285), false),
+            (Declared("dense LVL", TimberProduct.Lvl, 500), true), (Declared("light LVL", TimberProduct.Lvl, 470), false),
+        ];
+        Gen.Select(Gen.Int[0, materials.Length + 1], Gen.Bool, Gen.Bool, Gen.Bool, Gen.Bool, Gen.Double[0, 20])
+            .Sample((mi, circle, bowed, rateGiven, threeSides, eMm) =>
+            {
+                Material mat = mi < materials.Length ? materials[mi].Material : mi == materials.Length ? NdsGrades.DouglasFirLarchNo2 : IsotropicMaterial.GenericStructuralSteel;
+                bool european = mi < materials.Length;
+                var member = circle ? TimberFixtures.Round(220, 3000, mat) : TimberFixtures.Post(160, 220, 3000, mat);
+                var actions = Fire(40).WithEccentricity(Length.FromMillimeters(eMm), Length.Zero);
+                if (bowed) actions = actions.WithInitialBow(Length.FromMillimeters(6), null);
+                var method = new Ec5FireReducedSection(Duration.FromMinutes(30), threeSides ? FireExposure.ThreeSidesWidthFaceProtected : FireExposure.FourSides,
+                    notionalCharringRate: rateGiven ? Speed.FromMillimetersPerMinutes(0.8) : null);
+                bool expected = european && !circle && !bowed && (rateGiven || materials[mi].Covered);
+                var verdict = method.AppliesTo(member.Resolved, actions.Resolved);
+                if (verdict.IsApplicable != expected) return false;
+                try
+                {
+                    var r = Check.Evaluate(member, actions, method);
+                    return expected && r.Utilisation > 0;
+                }
+                catch (MethodNotApplicableException e)
+                {
+                    return !expected && e.Message.Contains(verdict.Reason!, StringComparison.Ordinal);
+                }
+            }, seed: Trust.PropertyTests.Seed, threads: 1);
+    }
 }

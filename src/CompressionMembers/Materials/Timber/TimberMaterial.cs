@@ -50,6 +50,10 @@ public sealed class TimberMaterial : Material
             ? Methods.Timber.En1995Factors.CharringRateMmPerMin(product, rhok.KilogramsPerCubicMeter, true) / 60000.0
             : double.NaN;
         RhokKgM3 = rhok.KilogramsPerCubicMeter;
+        // βc of EN 1995-1-1 (6.29) and kfi of EN 1995-1-2 Table 2.1, constants of the product, read once here rather than
+        // looked up by product on every check.
+        StraightnessFactor = Methods.Timber.En1995Factors.BetaCUnchecked(product);
+        FireFractileFactor = Methods.Timber.En1995Factors.KfiUnchecked(product);
         BendingStrength = fmk;
         TensionStrength = ft0k;
         ShearStrength = fvk;
@@ -127,6 +131,10 @@ public sealed class TimberMaterial : Material
     /// <summary>βn of EN 1995-1-2 Table 3.1 in m/s, or NaN where the table does not cover the product and density.</summary>
     internal double NotionalCharringRateMs { get; }
     internal double RhokKgM3 { get; }
+    /// <summary>βc of EN 1995-1-1 (6.29) for the product.</summary>
+    internal double StraightnessFactor { get; }
+    /// <summary>kfi of EN 1995-1-2 Table 2.1 for the product.</summary>
+    internal double FireFractileFactor { get; }
 
     /// <summary>The product type.</summary>
     public TimberProduct Product { get; }

@@ -182,7 +182,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         i.E005Pa = member.ElasticModulusPa;
         i.GMeanPa = mat.GMeanPa;
         i.E0MeanPa = mat.E0MeanPa;
-        i.BetaC = En1995Factors.BetaCUnchecked(mat.Product);
+        i.BetaC = mat.StraightnessFactor;
         i.Km = i.Rectangular ? 0.7 : 1.0;
         i.UseSoftwoodLtbFormula = mat.Product == TimberProduct.SolidSoftwood;
     }
@@ -216,7 +216,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         var mat = (TimberMaterial)member.Member.Material;
         double kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
         double gammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
-        double betaC = En1995Factors.BetaCUnchecked(mat.Product);
+        double betaC = mat.StraightnessFactor;
         double lrY = member.RelativeSlendernessY, lrZ = member.RelativeSlendernessZ;   // (6.21), (6.22)
         double fc0d = kmod * member.StrengthPa / gammaM;                              // (2.14)
         double sigma = actions.AxialForceN / member.AreaM2;

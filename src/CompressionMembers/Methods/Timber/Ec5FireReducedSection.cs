@@ -1,6 +1,8 @@
 using System;
 using System.Runtime.CompilerServices;
 using System.Collections.Generic;
+using System.Diagnostics;
+using System.Diagnostics.CodeAnalysis;
 using CompressionMembers.Actions;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials.Timber;
@@ -40,6 +42,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     internal const double D0M = 0.007;
     private const string ResRef = "EN 1995-1-2 4.2.2 (4.1)";
     private readonly double _tReqS;
+    private readonly double _k0d0;   // k0 d0 at the required time, the constant part of def (4.1)
     private readonly double? _betaNMs;
     private readonly double? _kfi;
 
@@ -70,6 +73,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         }
         if (kfi is { } k) Guard.InRange(k, 1.0, 1.5, nameof(kfi), "", "Factor kfi");
         _tReqS = t;
+        _k0d0 = K0(t) * D0M;
         _kfi = kfi;
         RequiredDuration = requiredDuration;
         Exposure = exposure;
@@ -105,7 +109,23 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     public bool ChecksLateralTorsionalBuckling { get; }
 
     /// <inheritdoc/>
-    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
+    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) =>
+        Covers(member, actions, out _) ? Applicability.Applicable : Refusal(member, actions);
+
+    /// <summary>What <see cref="AppliesTo"/> admits, as one test without sentences: a European timber material, a solid
+    /// rectangle, no initial bow, and a charring rate (given, or from Table 3.1 for the product and density).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private bool Covers(in ResolvedMember member, in ResolvedActions actions, [NotNullWhen(true)] out TimberMaterial? mat)
+    {
+        mat = member.Member.Material as TimberMaterial;
+        // The material holds NaN for βn where Table 3.1 does not cover its product and density.
+        return mat is not null && member.SectionKind == SectionKind.SolidRectangle && !actions.HasInitialBowY && !actions.HasInitialBowZ
+            && (_betaNMs is not null || !double.IsNaN(mat.NotionalCharringRateMs));
+    }
+
+    // The sentence for what Covers refused, rule by rule in the order a user fixes them; formed only when refused.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private Applicability Refusal(in ResolvedMember member, in ResolvedActions actions)
     {
         var v = TimberRules.EuropeanMaterial(member, Name);
         if (!v.IsApplicable) return v;
@@ -114,12 +134,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         v = TimberRules.NoInitialBow(actions, Name);
         if (!v.IsApplicable) return v;
         var mat = (TimberMaterial)member.Member.Material;
-        if (_betaNMs is null)
-        {
-            var why = En1995Factors.CharringCoverage(mat.Product, mat.RhokKgM3);
-            if (why is not null) return Applicability.NotApplicable(why);
-        }
-        return Applicability.Applicable;
+        if (_betaNMs is null && En1995Factors.CharringCoverage(mat.Product, mat.RhokKgM3) is { } why) return Applicability.NotApplicable(why);
+        throw new UnreachableException("Covers refused what every rule admits.");   // the two lists must agree
     }
 
     /// <summary>k0 of EN 1995-1-2 Table 4.1 for unprotected surfaces: t/20 min below 20 min, 1 beyond.</summary>
@@ -131,7 +147,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     // βn of Table 3.1 was read once with the material (the same operations); AppliesTo refused a material it does not cover.
     private double BetaN(TimberMaterial m) => _betaNMs ?? m.NotionalCharringRateMs;
 
-    private double Kfi(TimberMaterial m) => _kfi ?? En1995Factors.KfiUnchecked(m.Product);
+    private double Kfi(TimberMaterial m) => _kfi ?? m.FireFractileFactor;   // Table 2.1, read once with the material
 
     /// <summary>Residual width and depth, and the centroid shifts along z and y, after the effective depth def.</summary>
     internal static void Residual(FireExposure e, double bM, double hM, double defM, out double bFi, out double hFi, out double shiftZ, out double shiftY)
@@ -208,8 +224,10 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         Unsafe.SkipInit(out CheckNumbers numbers);
-        string? check = Numbers(member, actions, trace, ref numbers);
-        return check is null ? EvaluateGeneral(member, actions, trace) : numbers.ToResult(member, actions, this, check, trace);
+        string? check = Numbers(member, actions, ref numbers);
+        if (check is null) return EvaluateGeneral(member, actions, trace);
+        if (trace is not null) TraceCompression(trace, member, actions);
+        return numbers.ToResult(member, actions, this, check, trace);
     }
 
     /// <summary>Whether the straight-line compression path applies (no eccentricity, no end moments, no moment from a
@@ -219,22 +237,35 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         !(actions.HasEccentricity || actions.HasEndMoments || (IncludesCentroidShift && Exposure != FireExposure.FourSides));
 
     /// <summary>The straight-line path's numbers, or null with moments or once the section has burnt away (then
-    /// <see cref="EvaluateGeneral"/>).</summary>
+    /// <see cref="EvaluateGeneral"/>). For a member the method applies to.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
-        IsPureCompression(actions) ? CompressionNumbers(member, actions, trace, ref numbers) : null;
+    internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        IsPureCompression(actions) ? CompressionNumbers(member, actions, (TimberMaterial)member.Member.Material, ref numbers) : null;
+
+    /// <summary>Check's entry: the straight-line path's numbers when the method applies (<see cref="Covers"/>) and the
+    /// actions are pure compression. Returns the governing check's words, or null for everything else — not applicable,
+    /// moments, the section burnt away, numbers a result would refuse — which Check then takes to <see cref="AppliesTo"/>
+    /// and <see cref="EvaluateGeneral"/> (where the refusal, the general path or the exception comes from).</summary>
+    // One non-inlined call in Check's loop, in which the material is read and type-tested once for the test and the
+    // numbers. It calls nothing (the steps are written by the caller, after it): a function that makes no call keeps its
+    // values in the registers a call would clobber, and needs no callee-saved registers saved and restored
+    // (docs/performance.md, fourth round).
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    internal string? ApplicableNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        Covers(member, actions, out var mat) && IsPureCompression(actions) ? CompressionNumbers(member, actions, mat, ref numbers) : null;
 
     /// <summary>The compression path's numbers; returns the governing check's words, or null when the residual section has
-    /// burnt away (the general path reports that).</summary>
+    /// burnt away or the numbers are ones a result refuses (the general path reports either).</summary>
     // Pure compression of the residual section (no eccentricity, no end moments, no centroid shift): straight on scalars
     // with the kernel's compression core, the same operations as the general path (a test holds them bit for bit). The
-    // traced and untraced checks both take it.
-    [MethodImpl(MethodImplOptions.NoInlining)]
-    internal string? CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    // traced and untraced checks both take it; the steps are written by the caller after the numbers (TraceCompression),
+    // so that nothing here is live across a call (every vector register is the caller's to save on x64 Unix: values live
+    // across a call would be stored to the stack on every check, traced or not).
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]   // into ApplicableNumbers and Evaluate
+    internal string? CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat, ref CheckNumbers numbers)
     {
-        var mat = (TimberMaterial)member.Member.Material;
         TimberRules.Dimensions(member, out double b, out double h);
-        double def = EffectiveDepth(_tReqS, BetaN(mat));
+        double def = BetaN(mat) * _tReqS + _k0d0;   // (4.1): def = βn t + k0 d0, with k0 d0 formed once with the method
         Residual(Exposure, b, h, def, out double bFi, out double hFi, out _, out _);
         if (!(bFi > 0) || !(hFi > 0)) return null;
         double a = bFi * hFi, iy = bFi * hFi * hFi * hFi / 12, iz = hFi * bFi * bFi * bFi / 12;
@@ -247,35 +278,32 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         double gammaFi = FireMaterialFactor, fd = kfi * member.StrengthPa, e20 = kfi * member.ElasticModulusPa;
         if (gammaFi != 1.0) { fd /= gammaFi; e20 /= gammaFi; }
         double sigma = actions.AxialForceN / a;
-        Ec5Kernel.Compression(lrY, lrZ, En1995Factors.BetaCUnchecked(mat.Product), fd, sigma, a,
-            out double kY, out double kZ, out double kcY, out double kcZ, out double uY, out double uZ, out double resistance);
+        Ec5Kernel.Compression(lrY, lrZ, mat.StraightnessFactor, fd, sigma, a,
+            out _, out _, out double kcY, out double kcZ, out double uY, out double uZ, out double resistance);
         bool aboutY = uY >= uZ;
-        if (trace is not null)
-            TraceCompression(trace, member, actions, mat, def, bFi, hFi, lamY, lamZ, lrY, lrZ, kY, kZ, kcY, kcZ, fd, sigma, uY, uZ, aboutY, resistance);
+        double u = Math.Max(uY, uZ);
+        if (CheckResult.IsBroken(resistance, u)) return null;   // the general path computes the same and refuses them
         double kcGov = aboutY ? kcY : kcZ;
         numbers.DesignResistanceN = resistance;
-        numbers.Utilisation = Math.Max(uY, uZ);
+        numbers.Utilisation = u;
         numbers.GoverningAxis = aboutY ? BucklingAxis.Y : BucklingAxis.Z;
         numbers.GoverningMode = kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
         numbers.AboutY = new AxisOutcome(lefY, lamY, lrY, Math.PI * Math.PI * e20 * iy / (lefY * lefY), kcY, kcY * fd * a);
         numbers.AboutZ = new AxisOutcome(lefZ, lamZ, lrZ, Math.PI * Math.PI * e20 * iz / (lefZ * lefZ), kcZ, kcZ * fd * a);
         numbers.Torsional = default;
-        numbers.Validate(this, member);
         return aboutY ? CheckCompressionY : CheckCompressionZ;
     }
 
-    // The kernel records rebuilt from the values the compression path computed, for the shared trace writer.
+    /// <summary>The steps of the compression path, written after its numbers: the general path's records for the same
+    /// member and actions (Input and the kernel, the same operations as <see cref="CompressionNumbers"/>;
+    /// FastPathEquivalenceTests holds the two paths bit for bit, steps included).</summary>
     [MethodImpl(MethodImplOptions.NoInlining)]
-    private void TraceCompression(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat,
-        double def, double bFi, double hFi, double lamY, double lamZ, double lrY, double lrZ, double kY, double kZ, double kcY, double kcZ,
-        double fd, double sigma, double uY, double uZ, bool aboutY, double resistance)
+    internal void TraceCompression(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions)
     {
+        var mat = (TimberMaterial)member.Member.Material;
         var i = default(Ec5Input);
-        Input(member, actions, mat, _tReqS, ref i, out _, out _, out _, out _, out _);
-        var o = default(Ec5Output);
-        o.LambdaY = lamY; o.LambdaZ = lamZ; o.LambdaRelY = lrY; o.LambdaRelZ = lrZ; o.KY = kY; o.KZ = kZ; o.KcY = kcY; o.KcZ = kcZ;
-        o.Fc0dPa = fd; o.SigmaCPa = sigma; o.Stocky = lrY <= 0.3 && lrZ <= 0.3; o.UY = uY; o.UZ = uZ;
-        o.Governs = aboutY ? Governing.AboutY : Governing.AboutZ; o.Utilisation = Math.Max(uY, uZ); o.ResistanceN = resistance;
+        Input(member, actions, mat, _tReqS, ref i, out double def, out double bFi, out double hFi, out _, out _);
+        Ec5Kernel.Run(i, out var o);
         WriteTrace(trace, member, actions, mat, i, o, true, def, bFi, hFi, 0, 0);
     }
 
