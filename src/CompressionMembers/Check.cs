@@ -84,7 +84,9 @@ public static class Check
     // The straight-line paths of those five methods write their numbers (CheckNumbers: no references) and the result is
     // built here, once for all five, inlined into the caller: a method that returned the 240-byte result built it in a
     // zeroed temporary and copied it over, which cost a fire check about a fifth of its time (docs/performance.md, third
-    // round). The general paths of EN 1995-1-2 and EN 1999-1-1 return their result themselves (OtherPath).
+    // round). The general paths of EN 1995-1-2 and EN 1999-1-1 return their result themselves (OtherPath). The untraced
+    // entries of EN 1995-1-2 and NDS call nothing (fourth round): the steps and the broken-method exception come from
+    // the method's own Evaluate, through OtherPath.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static CheckResult Run(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace)
     {
@@ -100,11 +102,11 @@ public static class Check
         switch (method)
         {
             case Ec5ColumnStability m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
-            case Ec5FireReducedSection m:   // tests applicability itself; null goes to OtherPath, which tests it again and says why
-                verdict = default;
-                if ((check = m.ApplicableNumbers(rm, ra, ref numbers)) is not null && trace is not null) m.TraceCompression(trace, rm, ra);
-                break;
-            case NdsColumnStability m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            // Untraced, these two call an entry that calls nothing; traced (or null: a path beside the straight line, or
+            // numbers a result refuses) they go to OtherPath and the method's own Evaluate. NDS tests applicability in
+            // its entry; OtherPath tests it again to say why.
+            case Ec5FireReducedSection m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable && trace is null ? m.Numbers(rm, ra, ref numbers) : null; break;
+            case NdsColumnStability m: verdict = default; check = trace is null ? m.ApplicableNumbers(rm, ra, ref numbers) : null; break;
             case Eurocode9Compression m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
             case BucklingConstantMethod m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
             default: throw new UnreachableException();   // the type test above admitted only these five
@@ -113,14 +115,15 @@ public static class Check
         return check is not null ? numbers.ToResult(rm, ra, method, check, trace) : OtherPath(rm, ra, method, trace);
     }
 
-    // The paths that return their result themselves: EN 1995-1-2 with moments or with the section burnt away, and
-    // EN 1999-1-1 with welds, open sections or bending (the general paths, which write their records).
+    // The paths that return their result themselves: EN 1995-1-2 and NDS traced or beside their straight line (the
+    // method's own Evaluate, which also throws for a broken result), and EN 1999-1-1 with welds, open sections or bending
+    // (its general path, which writes its records).
     [MethodImpl(MethodImplOptions.NoInlining)]
     private static CheckResult OtherPath(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace) =>
         method switch
         {
-            Ec5FireReducedSection m => m.AppliesTo(rm, ra) is { IsApplicable: false } v
-                ? ThrowNotApplicable(method, rm.Member, v.Reason!) : m.EvaluateGeneral(rm, ra, trace),
+            Ec5FireReducedSection m => m.Evaluate(rm, ra, trace),   // applicability tested in Run
+            NdsColumnStability m => m.AppliesTo(rm, ra) is { IsApplicable: false } v ? ThrowNotApplicable(method, rm.Member, v.Reason!) : m.Evaluate(rm, ra, trace),
             Eurocode9Compression m => m.EvaluateGeneral(rm, ra, trace),
             _ => throw new UnreachableException(),   // the other three always give their numbers
         };

@@ -327,4 +327,63 @@ public class NdsColumnStabilityTests
         Assert.Contains("RB = 52.5", ex.Message);
         Assert.Contains("NDS 3.3.3.7", ex.Message);
     }
+
+    // The method's applicability, restated here from its sources: US reference design values (not a European class, not
+    // another material), a solid rectangle or circle, no initial bow, a load duration unless CD (ASD) or λ (LRFD) is given,
+    // le/d ≤ 50, or 75 during construction (NDS 2018 3.7.1.4, with the square of equal area for a circle, 3.7.3), and for a
+    // rectangle deeper than wide bent about y, RB = √(le d / b²) ≤ 50 with le from lu by Table 3.3.3 (3.3.3.7; its
+    // coefficients 2.06, 1.63 + 3d, 1.84 from memory). Check takes
+    // the straight-line path only for what the method admits and refuses the rest with the method's own sentence, traced
+    // or not, whatever the combination.
+    [Fact]
+    public void AppliesTo_EveryCombinationOfTheRules_AdmitsExactlyWhatTheRulesAdmit()
+    {
+        Material[] materials = [NdsGrades.DouglasFirLarchNo2, NdsGrades.Glulam24F18E, TimberGrades.C24, IsotropicMaterial.GenericStructuralSteel];
+        Gen.Select(Gen.Select(Gen.Int[0, materials.Length - 1], Gen.Int[0, 2], Gen.Double[20, 420], Gen.Bool, Gen.Bool),
+                Gen.Select(Gen.Bool, Gen.Bool, Gen.Bool, Gen.Bool, Gen.Bool))
+            .Sample((geometry, options) =>
+            {
+                var (mi, shape, lIn, bowed, eccentric) = geometry;
+                var (durationGiven, factorGiven, construction, lrfd, traced) = options;
+                var l = Length.FromInches(lIn);
+                // The deep board is braced about z at quarter points and free to twist over its length, so that RB can
+                // exceed 50 while le/d stays within the limit.
+                Section section = shape switch
+                {
+                    0 => new RectangleSection(Length.FromInches(3.5), Length.FromInches(3.5)),
+                    1 => new RectangleSection(Length.FromInches(1.5), Length.FromInches(11.25)),
+                    _ => new CircleSection(Length.FromInches(5.5)),
+                };
+                var restraint = shape == 1
+                    ? Restraint.PinnedBothAxes.WithAboutZ(AxisRestraint.PinnedPinned.WithBracingAt(l / 4, l / 2, l * 0.75))
+                    : Restraint.PinnedBothAxes;
+                var member = Member.Create(section, materials[mi], l, restraint, "post");
+                var actions = DesignActions.Compression(Force.FromKilopoundsForce(1));
+                if (durationGiven) actions = actions.WithLoadDuration(LoadDurationClass.MediumTerm);
+                if (eccentric) actions = actions.WithEccentricity(Length.FromInches(1), Length.Zero);
+                if (bowed) actions = actions.WithInitialBow(Length.FromInches(0.2), null);
+                var method = new NdsColumnStability(lrfd ? NdsDesignFormat.Lrfd : NdsDesignFormat.Asd,
+                    loadDurationFactor: factorGiven && !lrfd ? 1.15 : null, timeEffectFactor: factorGiven && lrfd ? 0.8 : null,
+                    allowConstructionSlenderness: construction);
+
+                var rm = member.Resolved;
+                double d1 = shape == 2 ? 5.5 * Math.Sqrt(Math.PI) / 2 : shape == 1 ? 11.25 : 3.5, d2 = shape == 2 ? d1 : shape == 1 ? 1.5 : 3.5;
+                double r = Math.Max(rm.EffectiveLengthYM / (d1 * 0.0254), rm.EffectiveLengthZM / (d2 * 0.0254));
+                double lu = rm.EffectiveLengthTorsionalM / 0.0254, le = lu / 11.25 < 7 ? 2.06 * lu : lu / 11.25 <= 14.3 ? 1.63 * lu + 3 * 11.25 : 1.84 * lu;
+                bool rbTooHigh = shape == 1 && eccentric && Math.Sqrt(le * 11.25 / (1.5 * 1.5)) > 50;
+                bool expected = mi < 2 && !bowed && (durationGiven || factorGiven) && r <= (construction ? 75 : 50) * (1 + 1e-9) && !rbTooHigh;
+
+                var verdict = method.AppliesTo(rm, actions.Resolved);
+                if (verdict.IsApplicable != expected) return false;
+                try
+                {
+                    var result = traced ? Check.EvaluateWithTrace(member, actions, method) : Check.Evaluate(member, actions, method);
+                    return expected && result.Utilisation > 0;
+                }
+                catch (MethodNotApplicableException e)
+                {
+                    return !expected && e.Message.Contains(verdict.Reason!, StringComparison.Ordinal);
+                }
+            }, seed: Trust.PropertyTests.Seed, iter: 3000, threads: 1);   // enough draws to reach every rule's edge
+    }
 }

@@ -109,6 +109,10 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     public bool ChecksLateralTorsionalBuckling { get; }
 
     /// <inheritdoc/>
+    // Inlined into Check's loop: the test in line, the sentences in Refusal. (Moving the test into the kernel, with the
+    // material type-tested once, was measured and rejected: a loop that had checked another method first ran at twice the
+    // hand-written loop; docs/performance.md, fourth round.)
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) =>
         Covers(member, actions, out _) ? Applicability.Applicable : Refusal(member, actions);
 
@@ -236,32 +240,22 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     internal bool IsPureCompression(in ResolvedActions actions) =>
         !(actions.HasEccentricity || actions.HasEndMoments || (IncludesCentroidShift && Exposure != FireExposure.FourSides));
 
-    /// <summary>The straight-line path's numbers, or null with moments or once the section has burnt away (then
-    /// <see cref="EvaluateGeneral"/>). For a member the method applies to.</summary>
+    /// <summary>The straight-line path's numbers, or null with moments, once the section has burnt away, or for numbers a
+    /// result refuses (then <see cref="EvaluateGeneral"/>, which reports either). For a member the method applies to;
+    /// <see cref="Check"/> calls it for untraced checks and builds the result itself.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
         IsPureCompression(actions) ? CompressionNumbers(member, actions, (TimberMaterial)member.Member.Material, ref numbers) : null;
-
-    /// <summary>Check's entry: the straight-line path's numbers when the method applies (<see cref="Covers"/>) and the
-    /// actions are pure compression. Returns the governing check's words, or null for everything else — not applicable,
-    /// moments, the section burnt away, numbers a result would refuse — which Check then takes to <see cref="AppliesTo"/>
-    /// and <see cref="EvaluateGeneral"/> (where the refusal, the general path or the exception comes from).</summary>
-    // One non-inlined call in Check's loop, in which the material is read and type-tested once for the test and the
-    // numbers. It calls nothing (the steps are written by the caller, after it): a function that makes no call keeps its
-    // values in the registers a call would clobber, and needs no callee-saved registers saved and restored
-    // (docs/performance.md, fourth round).
-    [MethodImpl(MethodImplOptions.NoInlining)]
-    internal string? ApplicableNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
-        Covers(member, actions, out var mat) && IsPureCompression(actions) ? CompressionNumbers(member, actions, mat, ref numbers) : null;
 
     /// <summary>The compression path's numbers; returns the governing check's words, or null when the residual section has
     /// burnt away or the numbers are ones a result refuses (the general path reports either).</summary>
     // Pure compression of the residual section (no eccentricity, no end moments, no centroid shift): straight on scalars
     // with the kernel's compression core, the same operations as the general path (a test holds them bit for bit). The
-    // traced and untraced checks both take it; the steps are written by the caller after the numbers (TraceCompression),
-    // so that nothing here is live across a call (every vector register is the caller's to save on x64 Unix: values live
-    // across a call would be stored to the stack on every check, traced or not).
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]   // into ApplicableNumbers and Evaluate
+    // traced and untraced checks both take it. It calls nothing: the steps are written after it (TraceCompression, in
+    // Evaluate) and broken numbers go to the general path, which throws; so no value here is live across a call (every
+    // vector register is the caller's to save on x64 Unix: such values were stored to the stack on every check, traced or
+    // not) and no callee-saved register is saved and restored (docs/performance.md, fourth round).
+    [MethodImpl(MethodImplOptions.NoInlining)]
     internal string? CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat, ref CheckNumbers numbers)
     {
         TimberRules.Dimensions(member, out double b, out double h);
@@ -298,7 +292,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     /// member and actions (Input and the kernel, the same operations as <see cref="CompressionNumbers"/>;
     /// FastPathEquivalenceTests holds the two paths bit for bit, steps included).</summary>
     [MethodImpl(MethodImplOptions.NoInlining)]
-    internal void TraceCompression(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions)
+    private void TraceCompression(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions)
     {
         var mat = (TimberMaterial)member.Member.Material;
         var i = default(Ec5Input);

@@ -1,6 +1,8 @@
 using System;
 using System.Runtime.CompilerServices;
 using System.Collections.Generic;
+using System.Diagnostics;
+using System.Diagnostics.CodeAnalysis;
 using CompressionMembers.Actions;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials;
@@ -171,6 +173,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         return LambdaFor(duration);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static double CdFor(LoadDurationClass d) => d switch
     {
         LoadDurationClass.Permanent => 0.9,
@@ -180,6 +183,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         _ => 1.6,
     };
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static double LambdaFor(LoadDurationClass d) => d switch
     {
         LoadDurationClass.Permanent => 0.6,
@@ -192,6 +196,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     /// <summary>Column stability factor Cp of NDS (3.7-1).</summary>
     /// <param name="ratio">FcE / Fc*.</param>
     /// <param name="c">0.8, 0.85 or 0.9.</param>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double Cp(double ratio, double c)
     {
         double a = (1 + ratio) / (2 * c);
@@ -199,6 +204,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     }
 
     /// <summary>Beam stability factor CL of NDS (3.3-6).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double Cl(double ratio)
     {
         double a = (1 + ratio) / 1.9;
@@ -206,6 +212,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     }
 
     /// <summary>Effective length for bending of NDS Table 3.3.3, "single span or cantilever when no other condition applies".</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double BendingEffectiveLength(double luM, double dM)
     {
         double r = luM / dM;
@@ -223,9 +230,39 @@ public sealed class NdsColumnStability : IResistanceMethod
     }
 
     /// <inheritdoc/>
-    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
+    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) =>
+        Covers(member, actions, out _) ? Applicability.Applicable : Refusal(member, actions);
+
+    /// <summary>What <see cref="AppliesTo"/> admits, as one test without sentences: US reference design values, a solid
+    /// rectangle or circle, no initial bow, a load duration where the factor needs one, le/d within the limit (3.7.1.4)
+    /// and, for a deep rectangle in bending about y, RB within 50 (3.3.3.7).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private bool Covers(in ResolvedMember member, in ResolvedActions actions, [NotNullWhen(true)] out NdsTimberMaterial? mat)
     {
-        if (member.Member.Material is not NdsTimberMaterial mat) return NotNds(member.Member.Material);
+        mat = member.Member.Material as NdsTimberMaterial;
+        var kind = member.SectionKind;
+        if (mat is null || (kind != SectionKind.SolidRectangle && kind != SectionKind.SolidCircle) || actions.HasInitialBowY || actions.HasInitialBowZ
+            || ((Format == NdsDesignFormat.Asd ? _cd : _lambda) is null && actions.LoadDuration == LoadDurationClass.Unspecified))
+            return false;
+        Slenderness(member, out _, out _, out double r1, out double r2);
+        // A relative 1e-9 allowance absorbs unit-conversion rounding (75 in / 1.5 in in SI gives 50.000000000001).
+        if (Math.Max(r1, r2) > SlendernessLimit * (1 + 1e-9)) return false;
+        return !(kind == SectionKind.SolidRectangle && TimberRules.MomentY(actions) > 0 && BendingSlenderness(member) > 50);
+    }
+
+    // RB of 3.3.3.7 for a rectangle deeper than wide (0 otherwise: no lateral torsional buckling to limit).
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static double BendingSlenderness(in ResolvedMember member)
+    {
+        TimberRules.Dimensions(member, out double b, out double h);
+        return h > b ? Math.Sqrt(BendingEffectiveLength(member.EffectiveLengthTorsionalM, h) * h / (b * b)) : 0;
+    }
+
+    // The sentence for what Covers refused, rule by rule in the order a user fixes them; formed only when refused.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private Applicability Refusal(in ResolvedMember member, in ResolvedActions actions)
+    {
+        if (member.Member.Material is not NdsTimberMaterial) return NotNds(member.Member.Material);
         var v = TimberRules.SolidSection(member, Name, allowCircle: true);
         if (!v.IsApplicable) return v;
         v = TimberRules.NoInitialBow(actions, Name);
@@ -237,19 +274,13 @@ public sealed class NdsColumnStability : IResistanceMethod
         }
         Slenderness(member, out _, out _, out double r1, out double r2);
         double r = Math.Max(r1, r2);
-        // A relative 1e-9 allowance absorbs unit-conversion rounding (75 in / 1.5 in in SI gives 50.000000000001).
         if (r > SlendernessLimit * (1 + 1e-9)) return TooSlender(r);
         if (member.SectionKind == SectionKind.SolidRectangle && TimberRules.MomentY(actions) > 0)
         {
-            TimberRules.Dimensions(member, out double b, out double h);
-            if (h > b)
-            {
-                double rb = Math.Sqrt(BendingEffectiveLength(member.EffectiveLengthTorsionalM, h) * h / (b * b));
-                if (rb > 50) return TooSlenderInBending(rb);
-            }
+            double rb = BendingSlenderness(member);
+            if (rb > 50) return TooSlenderInBending(rb);
         }
-        _ = mat;
-        return Applicability.Applicable;
+        throw new UnreachableException("Covers refused what every rule admits.");   // the two lists must agree
     }
 
     // The refusals' sentences, built only when refused and kept out of the code of every check.
@@ -275,12 +306,29 @@ public sealed class NdsColumnStability : IResistanceMethod
         return numbers.ToResult(member, actions, this, check, trace);
     }
 
-    /// <summary>The check's numbers (validated); returns the governing check's words. <see cref="Check"/> calls it and
-    /// builds the result itself.</summary>
+    /// <summary>The check's numbers (validated), traced or not; returns the governing check's words. The method's own
+    /// <see cref="Evaluate"/> takes it, and so do Check's traced checks (through Evaluate).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        Kernel<MethodEntry>(member, actions, trace, ref numbers)!;
+
+    /// <summary>Check's entry for an untraced check: the numbers when the method applies (<see cref="Covers"/>) and a
+    /// result would accept them; null for everything else, which Check takes to <see cref="AppliesTo"/> and
+    /// <see cref="Evaluate"/> (where the refusal or the broken-method exception comes from).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? ApplicableNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        Kernel<CheckEntry>(member, actions, null, ref numbers);
+
+    // The check itself, one source compiled twice (KernelEntry): for Check's entry it tests applicability, writes no
+    // steps and returns null for numbers a result would refuse, and then calls nothing, so its values stay in registers
+    // and it saves none; for the method's entry it writes the steps when traced and throws for a broken result.
     [MethodImpl(MethodImplOptions.NoInlining)]
-    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+        where TEntry : struct
     {
-        var mat = (NdsTimberMaterial)member.Member.Material;
+        NdsTimberMaterial? mat;
+        if (typeof(TEntry) == typeof(CheckEntry)) { if (!Covers(member, actions, out mat)) return null; }
+        else mat = (NdsTimberMaterial)member.Member.Material;
         var adj = Adjustments;
         bool asd = Format == NdsDesignFormat.Asd;
         double cd = asd ? _cd ?? CdFor(actions.LoadDuration) : 1.0;
@@ -346,7 +394,7 @@ public sealed class NdsColumnStability : IResistanceMethod
 
         // The steps are written by a separate method (cold code) that receives the values computed above, so that the
         // untraced frame stays small.
-        if (trace is not null)
+        if (typeof(TEntry) == typeof(MethodEntry) && trace is not null)
             WriteTrace(trace, member, actions, mat, adj, asd, cd, lam, kfC, kfB, kfE, phiC, phiB, phiS, fcRef, fbRef, eminRef, fcStar, eminP, fbStar,
                 d1, d2, r1, r2, r, c, fcE, cp, fcP, fc, m1, m2, fb1, fb2, bending, ltb, le, rb, fbE, cl, fb1P, fb2P, fcE1, fcE2, u, den1, den2, unbounded);
 
@@ -359,7 +407,8 @@ public sealed class NdsColumnStability : IResistanceMethod
         numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, double.NaN, fcE1 * area, cpY, fcStar * cpY * area);
         numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, double.NaN, fcE2 * area, cpZ, fcStar * cpZ * area);
         numbers.Torsional = ltb ? new AxisOutcome(le, rb, double.NaN, double.NaN, cl, double.NaN) : default;
-        numbers.Validate(this, member);
+        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(numbers.DesignResistanceN, u)) return null; }
+        else numbers.Validate(this, member);
         return bending ? "NDS 2018 15.4.1 (15.4-1): eccentric axial compression, 3.9.2 interaction" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
     }
 

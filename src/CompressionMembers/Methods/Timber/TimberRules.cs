@@ -55,14 +55,17 @@ internal static class TimberRules
         Applicability.NotApplicable($"{method} needs the load-duration class of the action case to set {what}; give it with DesignActions.WithLoadDuration (permanent, long-term, medium-term, short-term or instantaneous), or give {what} explicitly when creating the method.");
 
     /// <summary>First-order design moment about y at the governing section: |N ey| + max(|My,top|, |My,bottom|).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double MomentY(in ResolvedActions a) =>
         Math.Abs(a.AxialForceN * a.EccentricityYM) + Math.Max(Math.Abs(a.EndMomentYTopNm), Math.Abs(a.EndMomentYBottomNm));
 
     /// <summary>First-order design moment about z at the governing section.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double MomentZ(in ResolvedActions a) =>
         Math.Abs(a.AxialForceN * a.EccentricityZM) + Math.Max(Math.Abs(a.EndMomentZTopNm), Math.Abs(a.EndMomentZBottomNm));
 
     /// <summary>Width b (along y) and depth h (along z) of a rectangle; the diameter twice for a circle.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static void Dimensions(in ResolvedMember m, out double bM, out double hM)
     {
         // From the resolved fibre distances (doubles): a rectangle spans them exactly, a circle has radius d/2 both ways.
