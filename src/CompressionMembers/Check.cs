@@ -107,7 +107,9 @@ public static class Check
             // its entry; OtherPath tests it again to say why.
             case Ec5FireReducedSection m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable && trace is null ? m.Numbers(rm, ra, ref numbers) : null; break;
             case NdsColumnStability m: verdict = default; check = trace is null ? m.ApplicableNumbers(rm, ra, ref numbers) : null; break;
-            case Eurocode9Compression m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case Eurocode9Compression m:   // untraced: the kernel compiled without steps; null goes to the general path
+                check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
+                break;
             case BucklingConstantMethod m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
             default: throw new UnreachableException();   // the type test above admitted only these five
         }

@@ -171,43 +171,54 @@ public sealed class Eurocode9Compression : IResistanceMethod
     internal bool IsFlexuralOnly(in ResolvedMember member, in ResolvedActions actions) =>
         Welding.Location == WeldLocation.None && !IsOpenForTorsion(member.SectionKind) && !(actions.HasEccentricity || actions.HasEndMoments);
 
-    /// <summary>The straight-line path's numbers, or null for welds, open sections and bending (then
-    /// <see cref="EvaluateGeneral"/>).</summary>
+    /// <summary>The straight-line path's numbers (validated), traced or not, or null for welds, open sections and bending
+    /// (then <see cref="EvaluateGeneral"/>). The method's own <see cref="Evaluate"/> and Check's traced checks take it.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
-        IsFlexuralOnly(member, actions) ? FlexuralNumbers(member, actions, trace, ref numbers) : null;
+        IsFlexuralOnly(member, actions) ? FlexuralNumbers<MethodEntry>(member, actions, trace, ref numbers) : null;
 
-    /// <summary>The straight-line path's numbers (validated); returns the governing check's words.</summary>
+    /// <summary>Check's entry for an untraced check of a member the method applies to: the straight-line path's numbers,
+    /// or null for welds, open sections, bending and numbers a result refuses (then <see cref="EvaluateGeneral"/>, which
+    /// computes the same and throws for those).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        IsFlexuralOnly(member, actions) ? FlexuralNumbers<CheckEntry>(member, actions, null, ref numbers) : null;
+
+    /// <summary>The straight-line path's numbers; returns the governing check's words.</summary>
     // An unwelded closed or solid section in compression: flexural buckling about both axes only (6.3.1.1, 6.3.1.2), straight
     // on the member's resolved values — the path of sweeps. It writes the same steps in the same order as the general path,
-    // and a test holds the two bit for bit; the traced and untraced checks both take it.
+    // and a test holds the two bit for bit; the traced and untraced checks both take it. One source compiled twice
+    // (KernelEntry): for Check's untraced entry the step-writing branches and the throw fold away, so that no value is
+    // live across a call (docs/performance.md, fourth round).
     [MethodImpl(MethodImplOptions.NoInlining)]
-    internal string FlexuralNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    internal string? FlexuralNumbers<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+        where TEntry : struct
     {
+        bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
         var alloy = (AluminiumAlloy)member.Member.Material;
         var entry = Ec9ClassificationCache.Get(member.Member.Section, alloy, false);
         ref readonly var c = ref entry.Result;
         double f0 = member.StrengthPa, aEff = c.AreaEffM2, gm1 = PartialFactorM1;
         var cls = alloy.BucklingClass;
-        if (trace is not null)
-            TraceInputs(trace, member, alloy, c, entry.Plates, f0, entry.UltimateStrengthPa, member.ElasticModulusPa, member.ShearModulusPa, cls, false);
+        if (traced)
+            TraceInputs(trace!, member, alloy, c, entry.Plates, f0, entry.UltimateStrengthPa, member.ElasticModulusPa, member.ShearModulusPa, cls, false);
         Ec9Rules.FlexuralCurve(cls, out double alpha, out double lam0);
-        if (trace is not null) TraceCurve(trace, cls, alpha, lam0);
+        if (traced) TraceCurve(trace!, cls, alpha, lam0);
         // λ̄ = √(Aeff f0 / Ncr) with Ncr of the gross section, χ of the alloy's curve, N b,Rd = κ χ Aeff f0 / γM1 with κ = 1.
         double lamY = Math.Sqrt(aEff * f0 / member.CriticalForceYN), lamZ = Math.Sqrt(aEff * f0 / member.CriticalForceZN);
         double chiY = Ec9Rules.Chi(lamY, alpha, lam0), chiZ = Ec9Rules.Chi(lamZ, alpha, lam0);
         double nRdY = 1.0 * chiY * aEff * f0 / gm1, nRdZ = 1.0 * chiZ * aEff * f0 / gm1;
-        if (trace is not null) TraceFlexural(trace, member, alpha, lam0, cls, lamY, chiY, nRdY, lamZ, chiZ, nRdZ);
+        if (traced) TraceFlexural(trace!, member, alpha, lam0, cls, lamY, chiY, nRdY, lamZ, chiZ, nRdZ);
 
         double nRd = nRdY; var axis = BucklingAxis.Y; var mode = FailureMode.FlexuralBuckling; string check = CheckFlexY;
         if (nRdZ < nRd) { nRd = nRdZ; axis = BucklingAxis.Z; check = CheckFlexZ; }
         if (c.Class == 4 && (axis == BucklingAxis.Y ? chiY : chiZ) >= 1) { mode = FailureMode.LocalBuckling; check = CheckLocal; }
         double nEd = actions.AxialForceN;
         double u = nEd / nRd;
-        if (trace is not null)
+        if (traced)
         {
-            TraceAxial(trace, nRd, check, nEd, u);
-            trace.Add("u", "utilisation", "governing value", u, StepUnit.None, Std);
+            TraceAxial(trace!, nRd, check, nEd, u);
+            trace!.Add("u", "utilisation", "governing value", u, StepUnit.None, Std);
         }
         numbers.DesignResistanceN = nRd;
         numbers.Utilisation = u;
@@ -216,7 +227,8 @@ public sealed class Eurocode9Compression : IResistanceMethod
         numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lamY, member.CriticalForceYN, chiY * 1.0, nRdY);
         numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lamZ, member.CriticalForceZN, chiZ * 1.0, nRdZ);
         numbers.Torsional = default;
-        numbers.Validate(this, member);
+        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(nRd, u)) return null; }
+        else numbers.Validate(this, member);
         return check;
     }
 
