@@ -101,7 +101,9 @@ public static class Check
         string? check;
         switch (method)
         {
-            case Ec5ColumnStability m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case Ec5ColumnStability m:
+                check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
+                break;
             // Untraced, these two call an entry that calls nothing; traced (or null: a path beside the straight line, or
             // numbers a result refuses) they go to OtherPath and the method's own Evaluate. NDS tests applicability in
             // its entry; OtherPath tests it again to say why.
@@ -110,7 +112,9 @@ public static class Check
             case Eurocode9Compression m:   // untraced: the kernel compiled without steps; null goes to the general path
                 check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
                 break;
-            case BucklingConstantMethod m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null; break;
+            case BucklingConstantMethod m:
+                check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
+                break;
             default: throw new UnreachableException();   // the type test above admitted only these five
         }
         if (!verdict.IsApplicable) return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
@@ -127,7 +131,9 @@ public static class Check
             Ec5FireReducedSection m => m.Evaluate(rm, ra, trace),   // applicability tested in Run
             NdsColumnStability m => m.AppliesTo(rm, ra) is { IsApplicable: false } v ? ThrowNotApplicable(method, rm.Member, v.Reason!) : m.Evaluate(rm, ra, trace),
             Eurocode9Compression m => m.EvaluateGeneral(rm, ra, trace),
-            _ => throw new UnreachableException(),   // the other three always give their numbers
+            // Untraced numbers a result refuses: the method's own Evaluate computes the same and throws.
+            Ec5ColumnStability or BucklingConstantMethod => method.Evaluate(rm, ra, trace),
+            _ => throw new UnreachableException(),
         };
 
     [MethodImpl(MethodImplOptions.NoInlining)]

@@ -130,10 +130,23 @@ public sealed class BucklingConstantMethod : IResistanceMethod
         return numbers.ToResult(member, actions, this, check, trace);
     }
 
-    /// <summary>The check's numbers (validated); returns the governing check's words. <see cref="Check"/> calls it and
-    /// builds the result itself.</summary>
+    /// <summary>The check's numbers (validated), traced or not; returns the governing check's words. The method's own
+    /// <see cref="Evaluate"/> and Check's traced checks take it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        Kernel<MethodEntry>(member, actions, trace, ref numbers)!;
+
+    /// <summary>Check's entry for an untraced check: the numbers, compiled without the steps; null for numbers a result
+    /// refuses (Check then takes <see cref="Evaluate"/>, which throws for them).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        Kernel<CheckEntry>(member, actions, null, ref numbers);
+
+    // One source compiled twice (KernelEntry): for Check's untraced entry the step writer and the throw fold away, so that
+    // no value is live across a call (docs/performance.md, fourth round).
     [MethodImpl(MethodImplOptions.NoInlining)]
-    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+        where TEntry : struct
     {
         var alloy = (AluminiumAlloy)member.Member.Material;
         bool aged = Group == TemperGroup.ArtificiallyAged || (Group == TemperGroup.FromAlloy && alloy.IsArtificiallyAged);
@@ -150,7 +163,7 @@ public sealed class BucklingConstantMethod : IResistanceMethod
         int branch = govY ? by : bz;
         double capacity = factor * fc * a;
         double u = actions.AxialForceN / capacity;
-        if (trace is not null) TraceSteps(trace, member, actions, alloy, aged, bc, dc, cc, y, z, by, bz, fy, fz, capacity, u);
+        if (typeof(TEntry) == typeof(MethodEntry) && trace is not null) TraceSteps(trace, member, actions, alloy, aged, bc, dc, cc, y, z, by, bz, fy, fz, capacity, u);
         numbers.DesignResistanceN = capacity;
         numbers.Utilisation = u;
         numbers.GoverningAxis = govY ? BucklingAxis.Y : BucklingAxis.Z;
@@ -158,7 +171,8 @@ public sealed class BucklingConstantMethod : IResistanceMethod
         numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.Slenderness / cc, y.CriticalForceN, fy / fcy, factor * fy * a);
         numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.Slenderness / cc, z.CriticalForceN, fz / fcy, factor * fz * a);
         numbers.Torsional = default;
-        numbers.Validate(this, member);
+        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(capacity, u)) return null; }
+        else numbers.Validate(this, member);
         return branch == 0 ? CheckYield : branch == 1 ? CheckInelastic : CheckElastic;
     }
 

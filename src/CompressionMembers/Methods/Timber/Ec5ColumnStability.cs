@@ -200,18 +200,27 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static bool IsPureCompression(in ResolvedActions actions) => !(actions.HasEccentricity || actions.HasEndMoments);
 
-    /// <summary>The check's numbers (validated), by the straight-line compression path or with bending; returns the
-    /// governing check's words. <see cref="Check"/> calls it and builds the result itself.</summary>
+    /// <summary>The check's numbers (validated), traced or not, by the straight-line compression path or with bending;
+    /// returns the governing check's words. The method's own <see cref="Evaluate"/> and Check's traced checks take it.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
-        IsPureCompression(actions) ? CompressionNumbers(member, actions, trace, ref numbers) : BendingNumbers(member, actions, trace, ref numbers);
+        IsPureCompression(actions) ? CompressionNumbers<MethodEntry>(member, actions, trace, ref numbers)! : BendingNumbers(member, actions, trace, ref numbers);
+
+    /// <summary>Check's entry for an untraced check: as <see cref="Numbers"/>, but the compression path compiled without its
+    /// steps, and null for numbers a result refuses (Check then takes <see cref="Evaluate"/>, which throws for them).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        IsPureCompression(actions) ? CompressionNumbers<CheckEntry>(member, actions, null, ref numbers) : BendingNumbers(member, actions, null, ref numbers);
 
     /// <summary>The compression path's numbers (validated); returns the governing check's words.</summary>
     // Pure compression (6.2 in the stocky range, 6.23/6.24 without moments), straight on the member's resolved values: the
     // path of parametric sweeps, so it marshals nothing through the kernel records. The traced and untraced checks both
-    // take it (tracing never changes the path), and a test holds it bit for bit to Ec5Kernel.Run on the same member.
+    // take it (tracing never changes the path), and a test holds it bit for bit to Ec5Kernel.Run on the same member. One
+    // source compiled twice (KernelEntry): for Check's untraced entry the step writer and the throw fold away, so that no
+    // value is live across a call (docs/performance.md, fourth round).
     [MethodImpl(MethodImplOptions.NoInlining)]
-    internal string CompressionNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    internal string? CompressionNumbers<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+        where TEntry : struct
     {
         var mat = (TimberMaterial)member.Member.Material;
         double kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
@@ -224,7 +233,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
             out double kY, out double kZ, out double kcY, out double kcZ, out double uY, out double uZ, out double resistance);
         bool aboutY = uY >= uZ;
         double u = Math.Max(uY, uZ);
-        if (trace is not null)
+        if (typeof(TEntry) == typeof(MethodEntry) && trace is not null)
             TraceCompression(trace, member, actions, mat, kmod, gammaM, lrY, lrZ, kY, kZ, kcY, kcZ, fc0d, sigma, uY, uZ, aboutY, u, resistance);
         double kcGov = aboutY ? kcY : kcZ;
         numbers.DesignResistanceN = resistance;
@@ -234,7 +243,8 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lrY, member.CriticalForceYN, kcY, kcY * fc0d * member.AreaM2);
         numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lrZ, member.CriticalForceZN, kcZ, kcZ * fc0d * member.AreaM2);
         numbers.Torsional = default;
-        numbers.Validate(this, member);
+        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(resistance, u)) return null; }
+        else numbers.Validate(this, member);
         return Ec5Kernel.CompressionCheckName(aboutY, aboutY ? lrY : lrZ);
     }
 
