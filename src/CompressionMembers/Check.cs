@@ -84,9 +84,10 @@ public static class Check
     // The straight-line paths of those five methods write their numbers (CheckNumbers: no references) and the result is
     // built here, once for all five, inlined into the caller: a method that returned the 240-byte result built it in a
     // zeroed temporary and copied it over, which cost a fire check about a fifth of its time (docs/performance.md, third
-    // round). The general paths of EN 1995-1-2 and EN 1999-1-1 return their result themselves (OtherPath). The untraced
-    // entries of EN 1995-1-2 and NDS call nothing (fourth round): the steps and the broken-method exception come from
-    // the method's own Evaluate, through OtherPath.
+    // round). For an untraced check each of the five calls a kernel that calls nothing (fourth round): it returns null
+    // for everything it does not compute itself — a path beside the straight line, numbers a result refuses, and for
+    // NDS, which tests its own applicability, a refusal — and OtherPath hands those to the method (its Evaluate or
+    // general path, which write the steps, refuse or throw). Traced checks of EN 1995-1-2 and NDS go there too.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static CheckResult Run(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace)
     {
@@ -104,12 +105,9 @@ public static class Check
             case Ec5ColumnStability m:
                 check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
                 break;
-            // Untraced, these two call an entry that calls nothing; traced (or null: a path beside the straight line, or
-            // numbers a result refuses) they go to OtherPath and the method's own Evaluate. NDS tests applicability in
-            // its entry; OtherPath tests it again to say why.
             case Ec5FireReducedSection m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable && trace is null ? m.Numbers(rm, ra, ref numbers) : null; break;
             case NdsColumnStability m: verdict = default; check = trace is null ? m.ApplicableNumbers(rm, ra, ref numbers) : null; break;
-            case Eurocode9Compression m:   // untraced: the kernel compiled without steps; null goes to the general path
+            case Eurocode9Compression m:
                 check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
                 break;
             case BucklingConstantMethod m:
@@ -121,9 +119,9 @@ public static class Check
         return check is not null ? numbers.ToResult(rm, ra, method, check, trace) : OtherPath(rm, ra, method, trace);
     }
 
-    // The paths that return their result themselves: EN 1995-1-2 and NDS traced or beside their straight line (the
-    // method's own Evaluate, which also throws for a broken result), and EN 1999-1-1 with welds, open sections or bending
-    // (its general path, which writes its records).
+    // What the untraced kernels leave to the method (see Run), and the traced checks of EN 1995-1-2 and NDS: the method's
+    // own Evaluate (which writes the steps and throws for a broken result), or EN 1999-1-1's general path (welds, open
+    // sections, bending).
     [MethodImpl(MethodImplOptions.NoInlining)]
     private static CheckResult OtherPath(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace) =>
         method switch
@@ -131,8 +129,7 @@ public static class Check
             Ec5FireReducedSection m => m.Evaluate(rm, ra, trace),   // applicability tested in Run
             NdsColumnStability m => m.AppliesTo(rm, ra) is { IsApplicable: false } v ? ThrowNotApplicable(method, rm.Member, v.Reason!) : m.Evaluate(rm, ra, trace),
             Eurocode9Compression m => m.EvaluateGeneral(rm, ra, trace),
-            // Untraced numbers a result refuses: the method's own Evaluate computes the same and throws.
-            Ec5ColumnStability or BucklingConstantMethod => method.Evaluate(rm, ra, trace),
+            Ec5ColumnStability or BucklingConstantMethod => method.Evaluate(rm, ra, trace),   // numbers a result refuses
             _ => throw new UnreachableException(),
         };
 
