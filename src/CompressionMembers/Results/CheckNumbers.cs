@@ -29,6 +29,17 @@ internal struct CheckNumbers
         if (CheckResult.IsBroken(DesignResistanceN, Utilisation)) CheckResult.ThrowBroken(method, member.Member, DesignResistanceN, Utilisation);
     }
 
+    /// <summary>The end of a kernel compiled for <typeparamref name="TEntry"/> (Methods/Common/KernelEntry.cs): for Check's
+    /// untraced entry, whether a result would accept the numbers (the kernel returns null when not, and the method's own
+    /// path throws), with no call; for the method's entry, <see cref="Validate"/>, which throws for a broken result.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal readonly bool Accepted<TEntry>(IResistanceMethod method, in ResolvedMember member) where TEntry : struct
+    {
+        if (typeof(TEntry) == typeof(Methods.Common.CheckEntry)) return !CheckResult.IsBroken(DesignResistanceN, Utilisation);
+        Validate(method, member);
+        return true;
+    }
+
     /// <summary>The result, for the method that computed (and validated) these numbers.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal readonly CheckResult ToResult(in ResolvedMember member, in ResolvedActions actions, IResistanceMethod method, string governingCheck,

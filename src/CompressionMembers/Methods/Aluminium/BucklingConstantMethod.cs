@@ -171,8 +171,7 @@ public sealed class BucklingConstantMethod : IResistanceMethod
         numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.Slenderness / cc, y.CriticalForceN, fy / fcy, factor * fy * a);
         numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.Slenderness / cc, z.CriticalForceN, fz / fcy, factor * fz * a);
         numbers.Torsional = default;
-        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(capacity, u)) return null; }
-        else numbers.Validate(this, member);
+        if (!numbers.Accepted<TEntry>(this, member)) return null;
         return branch == 0 ? CheckYield : branch == 1 ? CheckInelastic : CheckElastic;
     }
 

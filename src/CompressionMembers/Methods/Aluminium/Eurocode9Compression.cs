@@ -227,8 +227,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lamY, member.CriticalForceYN, chiY * 1.0, nRdY);
         numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lamZ, member.CriticalForceZN, chiZ * 1.0, nRdZ);
         numbers.Torsional = default;
-        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(nRd, u)) return null; }
-        else numbers.Validate(this, member);
+        if (!numbers.Accepted<TEntry>(this, member)) return null;
         return check;
     }
 

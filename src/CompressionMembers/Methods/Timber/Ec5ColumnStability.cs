@@ -243,8 +243,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, lrY, member.CriticalForceYN, kcY, kcY * fc0d * member.AreaM2);
         numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, lrZ, member.CriticalForceZN, kcZ, kcZ * fc0d * member.AreaM2);
         numbers.Torsional = default;
-        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(resistance, u)) return null; }
-        else numbers.Validate(this, member);
+        if (!numbers.Accepted<TEntry>(this, member)) return null;
         return Ec5Kernel.CompressionCheckName(aboutY, aboutY ? lrY : lrZ);
     }
 

@@ -230,21 +230,24 @@ public sealed class NdsColumnStability : IResistanceMethod
     }
 
     /// <inheritdoc/>
-    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) =>
-        Covers(member, actions, out _) ? Applicability.Applicable : Refusal(member, actions);
+    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
+    {
+        Slenderness(member, out _, out _, out double r1, out double r2);
+        return Covers(member, actions, r1, r2, out _) ? Applicability.Applicable : Refusal(member, actions);
+    }
 
     /// <summary>What <see cref="AppliesTo"/> admits, as one test without sentences: US reference design values, a solid
     /// rectangle or circle, no initial bow, a load duration where the factor needs one, le/d within the limit (3.7.1.4)
-    /// and, for a deep rectangle in bending about y, RB within 50 (3.3.3.7).</summary>
+    /// and, for a deep rectangle in bending about y, RB within 50 (3.3.3.7). <paramref name="r1"/> and <paramref name="r2"/>
+    /// are the slenderness ratios of <see cref="Slenderness"/>, which the kernel needs too and forms once.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private bool Covers(in ResolvedMember member, in ResolvedActions actions, [NotNullWhen(true)] out NdsTimberMaterial? mat)
+    private bool Covers(in ResolvedMember member, in ResolvedActions actions, double r1, double r2, [NotNullWhen(true)] out NdsTimberMaterial? mat)
     {
         mat = member.Member.Material as NdsTimberMaterial;
         var kind = member.SectionKind;
         if (mat is null || (kind != SectionKind.SolidRectangle && kind != SectionKind.SolidCircle) || actions.HasInitialBowY || actions.HasInitialBowZ
             || ((Format == NdsDesignFormat.Asd ? _cd : _lambda) is null && actions.LoadDuration == LoadDurationClass.Unspecified))
             return false;
-        Slenderness(member, out _, out _, out double r1, out double r2);
         // A relative 1e-9 allowance absorbs unit-conversion rounding (75 in / 1.5 in in SI gives 50.000000000001).
         if (Math.Max(r1, r2) > SlendernessLimit * (1 + 1e-9)) return false;
         return !(kind == SectionKind.SolidRectangle && TimberRules.MomentY(actions) > 0 && BendingSlenderness(member) > 50);
@@ -326,8 +329,10 @@ public sealed class NdsColumnStability : IResistanceMethod
     private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
         where TEntry : struct
     {
+        // le/d first: the applicability test reads it too (pure arithmetic on the resolved values, whatever the section).
+        Slenderness(member, out double d1, out double d2, out double r1, out double r2);
         NdsTimberMaterial? mat;
-        if (typeof(TEntry) == typeof(CheckEntry)) { if (!Covers(member, actions, out mat)) return null; }
+        if (typeof(TEntry) == typeof(CheckEntry)) { if (!Covers(member, actions, r1, r2, out mat)) return null; }
         else mat = (NdsTimberMaterial)member.Member.Material;
         var adj = Adjustments;
         bool asd = Format == NdsDesignFormat.Asd;
@@ -340,7 +345,6 @@ public sealed class NdsColumnStability : IResistanceMethod
         double fcStar = fcRef * cd * _fcFactors * lam;     // Fc CD CM Ct CF Ci (KF φc λ)
         double eminP = eminRef * _eminFactors;             // Emin CM Ct Ci (KF φs)
 
-        Slenderness(member, out double d1, out double d2, out double r1, out double r2);
         bool govY = r1 >= r2;
         double r = govY ? r1 : r2;
         double c = mat.ColumnConstant;
@@ -407,8 +411,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, double.NaN, fcE1 * area, cpY, fcStar * cpY * area);
         numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, double.NaN, fcE2 * area, cpZ, fcStar * cpZ * area);
         numbers.Torsional = ltb ? new AxisOutcome(le, rb, double.NaN, double.NaN, cl, double.NaN) : default;
-        if (typeof(TEntry) == typeof(CheckEntry)) { if (CheckResult.IsBroken(numbers.DesignResistanceN, u)) return null; }
-        else numbers.Validate(this, member);
+        if (!numbers.Accepted<TEntry>(this, member)) return null;
         return bending ? "NDS 2018 15.4.1 (15.4-1): eccentric axial compression, 3.9.2 interaction" : "NDS 2018 3.7.1: column stability, F′c = Fc* Cp";
     }
 
