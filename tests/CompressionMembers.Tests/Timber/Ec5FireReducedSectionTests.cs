@@ -191,8 +191,9 @@ public class Ec5FireReducedSectionTests
     // US reference values, not another material), a solid rectangle (the reduced cross-section of EN 1995-1-2 4.2.2 is a
     // rectangle), no initial bow in the actions (EN 1995-1-1 6.3.2 takes it through βc), and a charring rate: given by the
     // user, or from EN 1995-1-2:2004 Table 3.1, whose rows start at ρk = 290 kg/m³ for solid timber and glulam and at
-    // 480 kg/m³ for LVL. Check takes the straight-line path only for what the method admits and refuses the rest with the
-    // method's own sentence, whatever the combination.
+    // 480 kg/m³ for LVL (both limits from memory). Which rules exist and how they combine is the method's scope (common
+    // practice for a reduced cross-section check). Check takes the straight-line path only for what the method admits and
+    // refuses the rest with the method's own sentence, whatever the combination.
     [Fact]
     public void AppliesTo_EveryCombinationOfTheRules_AdmitsExactlyWhatTheRulesAdmit()
     {

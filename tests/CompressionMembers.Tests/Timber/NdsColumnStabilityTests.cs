@@ -331,8 +331,8 @@ public class NdsColumnStabilityTests
     // The method's applicability, restated here from its sources: US reference design values (not a European class, not
     // another material), a solid rectangle or circle, no initial bow, a load duration unless CD (ASD) or λ (LRFD) is given,
     // le/d ≤ 50, or 75 during construction (NDS 2018 3.7.1.4, with the square of equal area for a circle, 3.7.3), and for a
-    // rectangle deeper than wide bent about y, RB = √(le d / b²) ≤ 50 with le from lu by Table 3.3.3 (3.3.3.7; its
-    // coefficients 2.06, 1.63 + 3d, 1.84 from memory). Check takes
+    // rectangle deeper than wide bent about y, RB = √(le d / b²) ≤ 50 with le from lu by Table 3.3.3 (3.3.3.7). The limits
+    // 50 and 75, the equal-area square and the Table 3.3.3 coefficients 2.06, 1.63 + 3d, 1.84 are from memory. Check takes
     // the straight-line path only for what the method admits and refuses the rest with the method's own sentence, traced
     // or not, whatever the combination.
     [Fact]
