@@ -50,7 +50,19 @@ public class MethodBenchmarks
 
     public MethodBenchmarks() => _residual = Residual;
 
+    // BenchmarkDotNet's set-up and clean-up also print the machine probe (MachineProbe.cs), so that a run's log tells which
+    // of its processes began or ended in this machine's slow mode (docs/performance.md, "What the slow mode is").
     [GlobalSetup]
+    public void SetupAndProbe()
+    {
+        Setup();
+        Console.WriteLine(MachineProbe.Report("set-up"));
+    }
+
+    [GlobalCleanup]
+    public void ProbeAtCleanup() => Console.WriteLine(MachineProbe.Report("clean-up"));
+
+    /// <summary>Builds the members and checks every raw loop against its method (the plain loop calls it directly).</summary>
     public void Setup()
     {
         var rnd = new Random(2026);

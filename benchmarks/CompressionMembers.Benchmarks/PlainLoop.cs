@@ -21,6 +21,7 @@ internal static class PlainLoop
 {
     private const int Rounds = 9;
     private const double RoundSeconds = 0.25;
+    private const int ProbeCalls = 1000;   // about 15 ms per probe loop
 
     public static int Run(string[] args)
     {
@@ -52,17 +53,20 @@ internal static class PlainLoop
             int calls = Calibrate(t);
             var ts = new double[Rounds];
             var rs = new double[Rounds];
+            var ps = new double[Rounds];
             double sink = 0;
             for (int k = 0; k < Rounds; k++)
             {
                 ts[k] = Time(t, calls, ref sink);
                 rs[k] = Time(r, calls, ref sink);
+                ps[k] = Time(MachineProbe.RoundTrip, ProbeCalls, ref sink) / Time(MachineProbe.Arithmetic, ProbeCalls, ref sink);
             }
             Array.Sort(ts);
             Array.Sort(rs);
+            Array.Sort(ps);
             double tm = ts[Rounds / 2], rm = rs[Rounds / 2];
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"{name} {tm * 1e6:F1} {rm * 1e6:F1} {tm / rm:F2}{(double.IsNaN(sink) ? " NaN" : "")}"));
+                $"{name} {tm * 1e6:F1} {rm * 1e6:F1} {tm / rm:F2} {ps[Rounds / 2]:F2}{(double.IsNaN(sink) ? " NaN" : "")}"));
         }
         return 0;
     }
@@ -93,7 +97,8 @@ internal static class PlainLoop
     {
         string self = Assembly.GetEntryAssembly()!.Location;
         var ratios = names.ToDictionary(n => n, _ => new List<double>());
-        Console.WriteLine($"Plain loop, typed and raw alternating, {Rounds} rounds per method and process; per process: median typed and raw time of one call (2,000 checks), µs, and their ratio.");
+        Console.WriteLine($"Plain loop, typed and raw alternating, {Rounds} rounds per method and process; per process: median typed and raw time of one call (2,000 checks), µs, and their ratio;");
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"then the machine probe (MachineProbe.cs: memory round trip ÷ arithmetic, median of the same rounds; above {MachineProbe.SlowModeRatio:F2}: the machine's slow mode)."));
         for (int p = 1; p <= processes; p++)
         {
             var psi = new ProcessStartInfo(Environment.ProcessPath ?? "dotnet") { RedirectStandardOutput = true, UseShellExecute = false };
@@ -109,7 +114,8 @@ internal static class PlainLoop
             foreach (var line in output.Split('\n', StringSplitOptions.RemoveEmptyEntries))
             {
                 var f = line.Split(' ');
-                Console.WriteLine($"process {p}: {f[0],-12} typed {f[1],8} raw {f[2],8}  typed/raw {f[3]}");
+                bool slow = double.Parse(f[4], CultureInfo.InvariantCulture) > MachineProbe.SlowModeRatio;
+                Console.WriteLine($"process {p}: {f[0],-12} typed {f[1],8} raw {f[2],8}  typed/raw {f[3]}  probe {f[4]}{(slow ? "  slow mode" : "")}");
                 if (ratios.TryGetValue(f[0], out var list)) list.Add(double.Parse(f[3], CultureInfo.InvariantCulture));
             }
         }
