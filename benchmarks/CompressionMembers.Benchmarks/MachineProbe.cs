@@ -5,8 +5,8 @@ namespace CompressionMembers.Benchmarks;
 
 /// <summary>
 /// Tells whether the machine ran a plain-loop round, or began and ended a BenchmarkDotNet process of
-/// <see cref="MethodBenchmarks"/>, at its usual speed. Two loops over the same 2,000 values do the same
-/// arithmetic (two divisions, a square root and a reciprocal per value, as a column check does): <see cref="Arithmetic"/>
+/// <see cref="MethodBenchmarks"/>, at its usual speed. Two loops over the same 2,000 values do the same core
+/// arithmetic (three divisions and a square root per value, as a column check does): <see cref="Arithmetic"/>
 /// keeps everything in registers; <see cref="RoundTrip"/> hands ten values per item through memory (a call that writes
 /// them to an out struct, read back by the caller), as the typed path hands a method's numbers to <c>Check</c>. At this
 /// machine's usual speed the second took 1.05–1.1 times the first; in what docs/performance.md calls the slow mode
@@ -28,22 +28,22 @@ internal static class MachineProbe
     /// <summary>Above this ratio (round trip ÷ arithmetic) a round is marked as run in the slow mode.</summary>
     public const double SlowModeRatio = 1.2;
 
-    /// <summary>The probe's ratio: round trip ÷ arithmetic, the median of five pairs of 200 calls each.</summary>
+    private static double s_sink;   // keeps the loops' results alive
+
+    /// <summary>The probe's ratio: round trip ÷ arithmetic, the median of five pairs of 200 calls each (about 25 ms).</summary>
     public static double Ratio()
     {
         var r = new double[5];
-        double sink = 0;
-        for (int k = 0; k < r.Length; k++)
-        {
-            var sw = System.Diagnostics.Stopwatch.StartNew();
-            for (int c = 0; c < 200; c++) sink += RoundTrip();
-            double roundTrip = sw.Elapsed.TotalSeconds;
-            sw.Restart();
-            for (int c = 0; c < 200; c++) sink += Arithmetic();
-            r[k] = roundTrip / sw.Elapsed.TotalSeconds + (sink == 0.5 ? 1e-300 : 0);
-        }
+        for (int k = 0; k < r.Length; k++) r[k] = Seconds(RoundTrip) / Seconds(Arithmetic);
         Array.Sort(r);
         return r[r.Length / 2];
+    }
+
+    private static double Seconds(Func<double> loop)
+    {
+        var sw = System.Diagnostics.Stopwatch.StartNew();
+        for (int c = 0; c < 200; c++) s_sink += loop();
+        return sw.Elapsed.TotalSeconds;
     }
 
     /// <summary>One line for a benchmark process's log: the ratio, and "slow mode" above <see cref="SlowModeRatio"/>.</summary>
@@ -72,7 +72,7 @@ internal static class MachineProbe
         return s;
     }
 
-    /// <summary>The same arithmetic, ten values per item written to memory by a call and read back.</summary>
+    /// <summary>The same core arithmetic, ten values per item written to memory by a call and read back.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static double RoundTrip()
     {

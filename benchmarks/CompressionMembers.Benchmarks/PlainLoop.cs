@@ -21,7 +21,6 @@ internal static class PlainLoop
 {
     private const int Rounds = 9;
     private const double RoundSeconds = 0.25;
-    private const int ProbeCalls = 1000;   // about 15 ms per probe loop
 
     public static int Run(string[] args)
     {
@@ -59,7 +58,7 @@ internal static class PlainLoop
             {
                 ts[k] = Time(t, calls, ref sink);
                 rs[k] = Time(r, calls, ref sink);
-                ps[k] = Time(MachineProbe.RoundTrip, ProbeCalls, ref sink) / Time(MachineProbe.Arithmetic, ProbeCalls, ref sink);
+                ps[k] = MachineProbe.Ratio();
             }
             Array.Sort(ts);
             Array.Sort(rs);
