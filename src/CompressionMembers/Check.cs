@@ -105,7 +105,10 @@ public static class Check
             case Ec5ColumnStability m:
                 check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
                 break;
-            case Ec5FireReducedSection m: check = (verdict = m.AppliesTo(rm, ra)).IsApplicable && trace is null ? m.Numbers(rm, ra, ref numbers) : null; break;
+            case Ec5FireReducedSection m:
+                if (trace is null) check = m.ApplicableNumbers(rm, ra, ref numbers, out verdict);   // the material type-tested once
+                else { verdict = m.AppliesTo(rm, ra); check = null; }
+                break;
             case NdsColumnStability m: verdict = default; check = trace is null ? m.ApplicableNumbers(rm, ra, ref numbers) : null; break;
             case Eurocode9Compression m:
                 check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;

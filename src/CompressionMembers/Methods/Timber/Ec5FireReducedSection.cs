@@ -247,6 +247,21 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
         IsPureCompression(actions) ? CompressionNumbers(member, actions, (TimberMaterial)member.Member.Material, ref numbers) : null;
 
+    /// <summary>The applicability test and <see cref="Numbers"/> in one pass, for <see cref="Check"/>'s untraced checks: the
+    /// material that <see cref="Covers"/> type-tested is handed to the kernel as it is, instead of being read from the member
+    /// and type-tested a second time. <paramref name="verdict"/> is what <see cref="AppliesTo"/> returns.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? ApplicableNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers, out Applicability verdict)
+    {
+        if (!Covers(member, actions, out TimberMaterial? mat))
+        {
+            verdict = Refusal(member, actions);
+            return null;
+        }
+        verdict = Applicability.Applicable;
+        return IsPureCompression(actions) ? CompressionNumbers(member, actions, mat, ref numbers) : null;
+    }
+
     /// <summary>The compression path's numbers; returns the governing check's words, or null when the residual section has
     /// burnt away or the numbers are ones a result refuses (the general path reports either).</summary>
     // Pure compression of the residual section (no eccentricity, no end moments, no centroid shift): straight on scalars
