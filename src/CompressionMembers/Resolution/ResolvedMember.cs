@@ -23,12 +23,21 @@ namespace CompressionMembers.Resolution;
 public readonly struct ResolvedMember
 {
     internal ResolvedMember(Member member)
+        : this(member, member.Material, member.Section, member.LengthM, member.EffectiveLengthYM, member.EffectiveLengthZM, member.EffectiveLengthTorsionalM)
     {
-        Member = member;
-        var m = member.Material;
-        var p = member.Section.Props;
+    }
+
+    // One constructor for a member and for a candidate section resolved without one (WithSection), so both give the same
+    // bits for the same material, section and lengths.
+    private ResolvedMember(Member? member, Material m, Section section, double lengthM, double effectiveLengthYM, double effectiveLengthZM,
+        double effectiveLengthTorsionalM)
+    {
+        Member = member!;   // null only for WithSection's candidates, which never leave the size selector
+        Material = m;
+        Section = section;
+        var p = section.Props;
         MaterialKind = m.Kind;
-        SectionKind = member.Section.Kind;
+        SectionKind = section.Kind;
         ElasticModulusPa = m.ElasticModulusPa;
         ShearModulusPa = m.ShearModulusPa;
         StrengthPa = m.CompressiveStrengthPa;
@@ -44,10 +53,10 @@ public readonly struct ResolvedMember
         WarpingConstantM6 = p.WarpingConstantM6;
         ShearCentreYM = p.ShearCentreYM;
         ShearCentreZM = p.ShearCentreZM;
-        LengthM = member.LengthM;
-        EffectiveLengthYM = member.EffectiveLengthYM;
-        EffectiveLengthZM = member.EffectiveLengthZM;
-        EffectiveLengthTorsionalM = member.EffectiveLengthTorsionalM;
+        LengthM = lengthM;
+        EffectiveLengthYM = effectiveLengthYM;
+        EffectiveLengthZM = effectiveLengthZM;
+        EffectiveLengthTorsionalM = effectiveLengthTorsionalM;
         // Derived once here; the expressions are those the methods used to evaluate on every check (same bits).
         RadiusYM = Math.Sqrt(SecondMomentYM4 / AreaM2);
         RadiusZM = Math.Sqrt(SecondMomentZM4 / AreaM2);
@@ -72,8 +81,20 @@ public readonly struct ResolvedMember
         return member.Resolved;
     }
 
+    /// <summary>A resolved member with another section and the same material, length and restraint, without building a
+    /// <see cref="Members.Member"/>: the same values, to the bit, as <c>From(member.WithSection(section))</c>, but with a
+    /// null <see cref="Member"/> (so <see cref="IsValid"/> is false). Only for the size selector, and only with built-in
+    /// methods whose untraced checks read the material and section from here and nothing else from the member
+    /// (<c>SizeSelector</c> keeps that list); a result built from it has no member and is never handed out.</summary>
+    internal static ResolvedMember WithSection(in ResolvedMember basis, Section section) =>
+        new(null, basis.Material, section, basis.LengthM, basis.EffectiveLengthYM, basis.EffectiveLengthZM, basis.EffectiveLengthTorsionalM);
+
     /// <summary>The member this was resolved from (families read their own values from its material and section).</summary>
     public Member Member { get; }
+    /// <summary>The member's material (what methods type-test and read their family's values from).</summary>
+    internal Material Material { get; }
+    /// <summary>The member's section (for a family's own geometry: plates, dimensions, designation).</summary>
+    internal Section Section { get; }
     /// <summary>Material family.</summary>
     public MaterialKind MaterialKind { get; }
     /// <summary>Section family.</summary>

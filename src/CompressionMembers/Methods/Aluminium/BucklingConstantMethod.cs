@@ -78,7 +78,7 @@ public sealed class BucklingConstantMethod : IResistanceMethod
     /// <inheritdoc/>
     public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
     {
-        if (member.Member.Material is not AluminiumAlloy) return NotAluminium(member);
+        if (member.Material is not AluminiumAlloy) return NotAluminium(member);
         if (actions.HasEccentricity || actions.HasEndMoments)
             return Applicability.NotApplicable("this buckling-constant check covers concentric compression only; use EN 1999-1-1 for compression with bending.");
         if (actions.HasInitialBowY || actions.HasInitialBowZ)
@@ -89,7 +89,7 @@ public sealed class BucklingConstantMethod : IResistanceMethod
     // The refusal's sentence, built only when refused and kept out of the code of every check.
     [MethodImpl(MethodImplOptions.NoInlining)]
     private static Applicability NotAluminium(in ResolvedMember member) =>
-        Applicability.NotApplicable($"the buckling-constant method is for aluminium alloys; \"{member.Member.Material.Name}\" is a {member.MaterialKind} material.");
+        Applicability.NotApplicable($"the buckling-constant method is for aluminium alloys; \"{member.Material.Name}\" is a {member.MaterialKind} material.");
 
     /// <summary>Whether a temper is artificially aged (T5 to T9).</summary>
     internal static bool IsArtificiallyAged(string temper) =>
@@ -148,7 +148,7 @@ public sealed class BucklingConstantMethod : IResistanceMethod
     private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
         where TEntry : struct
     {
-        var alloy = (AluminiumAlloy)member.Member.Material;
+        var alloy = (AluminiumAlloy)member.Material;
         bool aged = Group == TemperGroup.ArtificiallyAged || (Group == TemperGroup.FromAlloy && alloy.IsArtificiallyAged);
         double fcy = member.StrengthPa, e = member.ElasticModulusPa, a = member.AreaM2;
         // Bc, Dc, Cc follow from the alloy's f0 and E alone: computed once with the alloy (Constants, the same operations).

@@ -114,8 +114,8 @@ public sealed class Eurocode9Compression : IResistanceMethod
     /// <inheritdoc/>
     public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
     {
-        if (member.Member.Material is not AluminiumAlloy alloy) return NotAluminium(member);
-        var section = member.Member.Section;
+        if (member.Material is not AluminiumAlloy alloy) return NotAluminium(member);
+        var section = member.Section;
         if (!Ec9Section.Supports(member.SectionKind)) return NoFlatParts(section);
         bool welded = Welding.Location == WeldLocation.Longitudinal;
         var entry = Ec9ClassificationCache.Get(section, alloy, welded);   // classified once per section, alloy and welding
@@ -143,7 +143,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
     // The refusals' sentences, built only when refused and kept out of the code of every check.
     [MethodImpl(MethodImplOptions.NoInlining)]
     private static Applicability NotAluminium(in ResolvedMember member) => Applicability.NotApplicable(
-        $"EN 1999-1-1 needs an aluminium alloy with its f0, fu, buckling class and HAZ factors; \"{member.Member.Material.Name}\" is a {member.MaterialKind} material. Use a preset of AluminiumAlloys or AluminiumAlloy.Create.");
+        $"EN 1999-1-1 needs an aluminium alloy with its f0, fu, buckling class and HAZ factors; \"{member.Material.Name}\" is a {member.MaterialKind} material. Use a preset of AluminiumAlloys or AluminiumAlloy.Create.");
 
     [MethodImpl(MethodImplOptions.NoInlining)]
     private static Applicability NoFlatParts(Section section) => Applicability.NotApplicable(
@@ -195,8 +195,8 @@ public sealed class Eurocode9Compression : IResistanceMethod
         where TEntry : struct
     {
         bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
-        var alloy = (AluminiumAlloy)member.Member.Material;
-        var entry = Ec9ClassificationCache.Get(member.Member.Section, alloy, false);
+        var alloy = (AluminiumAlloy)member.Material;
+        var entry = Ec9ClassificationCache.Get(member.Section, alloy, false);
         ref readonly var c = ref entry.Result;
         double f0 = member.StrengthPa, aEff = c.AreaEffM2, gm1 = PartialFactorM1;
         var cls = alloy.BucklingClass;
@@ -247,8 +247,8 @@ public sealed class Eurocode9Compression : IResistanceMethod
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal CheckResult EvaluateGeneral(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
-        var alloy = (AluminiumAlloy)member.Member.Material;
-        var section = member.Member.Section;
+        var alloy = (AluminiumAlloy)member.Material;
+        var section = member.Section;
         var cls = alloy.BucklingClass;
         var loc = Welding.Location;
         bool longitudinal = loc == WeldLocation.Longitudinal;

@@ -124,8 +124,8 @@ public sealed class TangentModulusColumn : IResistanceMethod
         double u = actions.AxialForceN / capacity;
         if (trace is not null)
         {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Member.Material.Source);
-            trace.Add("f0", "0.2 % proof strength", TraceCommon.Input, f0, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Material.Source);
+            trace.Add("f0", "0.2 % proof strength", TraceCommon.Input, f0, StepUnit.Stress, member.Material.Source);
             trace.Add("n", "Ramberg–Osgood exponent", double.IsNaN(Exponent) ? "f0 / 10 (f0 in MPa)" : ExponentBasis, n, StepUnit.None, "EN 1999-1-1 Annex E");
             trace.Note("ε = σ / E + 0.002 (σ / f0)^n; Et = 1 / [1/E + 0.002 n / f0 (σ / f0)^(n−1)].", Ref);
             TraceCommon.SectionAndLengths(trace, member);

@@ -36,8 +36,8 @@ public sealed class EulerBuckling : IResistanceMethod
         double squash = member.AreaM2 * member.StrengthPa;
         if (trace is not null)
         {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Member.Material.Source);
-            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Material.Source);
+            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Material.Source);
             TraceCommon.SectionAndLengths(trace, member);
             TraceCommon.Slenderness(trace, y, Ref);
             TraceCommon.Slenderness(trace, z, Ref);

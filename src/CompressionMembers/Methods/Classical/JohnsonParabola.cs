@@ -54,8 +54,8 @@ public sealed class JohnsonParabola : IResistanceMethod
         double sz = CriticalStress(z.Slenderness, e, f, out bool jz);
         if (trace is not null)
         {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Member.Material.Source);
-            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Material.Source);
+            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Material.Source);
             TraceCommon.SectionAndLengths(trace, member);
             trace.Add("Cc", "transition slenderness", "√(2 π² E / f)", cc, StepUnit.None, Ref);
             AxisSteps(trace, y, jy, sy, a);

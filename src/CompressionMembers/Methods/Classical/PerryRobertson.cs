@@ -92,8 +92,8 @@ public sealed class PerryRobertson : IResistanceMethod
     private void TraceAxes(CalculationTrace trace, in ResolvedMember member, in AxisData y, in AxisData z,
         double etaY, double etaZ, double seY, double seZ, double sY, double sZ)
     {
-        trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Member.Material.Source);
-        trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Member.Material.Source);
+        trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Material.Source);
+        trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Material.Source);
         TraceCommon.SectionAndLengths(trace, member);
         trace.Note("Imperfection: " + Imperfection.Description + ".", Ref);
         AxisSteps(trace, y, etaY, seY, sY, member.AreaM2);

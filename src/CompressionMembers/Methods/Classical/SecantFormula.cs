@@ -132,8 +132,8 @@ public sealed class SecantFormula : IResistanceMethod
 
         if (trace is not null)
         {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Member.Material.Source);
-            trace.Add("f", "stress limit (compressive strength)", TraceCommon.Input, f, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Material.Source);
+            trace.Add("f", "stress limit (compressive strength)", TraceCommon.Input, f, StepUnit.Stress, member.Material.Source);
             TraceCommon.SectionAndLengths(trace, member);
             TraceCommon.Slenderness(trace, y, Ref);
             TraceCommon.Slenderness(trace, z, Ref);

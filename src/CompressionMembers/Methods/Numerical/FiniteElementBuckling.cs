@@ -85,8 +85,8 @@ public sealed class FiniteElementBuckling : IResistanceMethod
         double u = actions.AxialForceN / capacity;
         if (trace is not null)
         {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Member.Material.Source);
-            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Material.Source);
+            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Material.Source);
             TraceCommon.SectionAndLengths(trace, member);
             trace.Note("The supports themselves are modelled (ideal ends or end springs, rigid braces); K is not used.", Ref);
             trace.Add("ny", "elements in the model about y", ElementCount is null ? "automatic mesh" : "requested " + ElementCount.Value.ToString(System.Globalization.CultureInfo.InvariantCulture), elementsY, StepUnit.None, Ref);

@@ -73,8 +73,8 @@ public sealed class SecondOrderElastic : IResistanceMethod
         }
         if (trace is not null)
         {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Member.Material.Source);
-            trace.Add("f", "stress limit (compressive strength)", TraceCommon.Input, f, StepUnit.Stress, member.Member.Material.Source);
+            trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Material.Source);
+            trace.Add("f", "stress limit (compressive strength)", TraceCommon.Input, f, StepUnit.Stress, member.Material.Source);
             TraceCommon.SectionAndLengths(trace, member);
             trace.Note("Pinned ends about both axes; K is not used: the member itself is analysed to second order.", Ref);
             trace.Add("NEd", "design axial compression", TraceCommon.Input, n, StepUnit.Force, "actions");

@@ -132,12 +132,13 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     }
 
     // kh of a member about y (on its depth h) or z (on its width b): the same operations as SizeFactor on Geometry's values.
-    private static readonly Func<Member, bool, double> MemberSizeFactor = static (m, aboutY) =>
+    private static readonly Func<Member, bool, double> MemberSizeFactor = static (m, aboutY) => ResolvedSizeFactor(m.Resolved, aboutY);
+
+    private static double ResolvedSizeFactor(in ResolvedMember r, bool aboutY)
     {
-        ref readonly var r = ref m.Resolved;
         TimberRules.Dimensions(r, out double b, out double h);
-        return SizeFactor((TimberMaterial)m.Material, r.SectionKind == SectionKind.SolidRectangle, aboutY ? h : b);
-    };
+        return SizeFactor((TimberMaterial)r.Material, r.SectionKind == SectionKind.SolidRectangle, aboutY ? h : b);
+    }
 
     /// <summary>The rule <see cref="SizeFactor"/> applied, in words for the trace (the same branches).</summary>
     internal static string SizeFactorRule(TimberMaterial m, bool rectangular, double depthM, string dim)
@@ -222,7 +223,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     internal string? CompressionNumbers<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
         where TEntry : struct
     {
-        var mat = (TimberMaterial)member.Member.Material;
+        var mat = (TimberMaterial)member.Material;
         double kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
         double gammaM = _gammaM ?? En1995Factors.GammaMUnchecked(mat.Product);
         double betaC = mat.StraightnessFactor;
@@ -284,7 +285,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal string BendingNumbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
     {
-        var mat = (TimberMaterial)member.Member.Material;
+        var mat = (TimberMaterial)member.Material;
         var i = default(Ec5Input);
         Geometry(member, mat, ref i);
         i.Kmod = _kmod ?? En1995Factors.KmodUnchecked(ServiceClass, actions.LoadDuration);
@@ -297,8 +298,17 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         {
             // Without the size factor, increases are skipped but a reduction (LVL deeper than 300 mm) still applies.
             // kh depends only on the member's section and material: computed on the member's first bending check, then kept.
-            i.KhY = member.Member.SizeFactor(aboutY: true, MemberSizeFactor);
-            i.KhZ = member.Member.SizeFactor(aboutY: false, MemberSizeFactor);
+            // A size selector's candidate section has no member to keep them with (ResolvedMember.WithSection).
+            if (member.Member is { } owner)
+            {
+                i.KhY = owner.SizeFactor(aboutY: true, MemberSizeFactor);
+                i.KhZ = owner.SizeFactor(aboutY: false, MemberSizeFactor);
+            }
+            else
+            {
+                i.KhY = ResolvedSizeFactor(member, aboutY: true);
+                i.KhZ = ResolvedSizeFactor(member, aboutY: false);
+            }
             if (!ApplySizeFactor)
             {
                 i.KhY = Math.Min(i.KhY, 1.0);

@@ -121,7 +121,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private bool Covers(in ResolvedMember member, in ResolvedActions actions, [NotNullWhen(true)] out TimberMaterial? mat)
     {
-        mat = member.Member.Material as TimberMaterial;
+        mat = member.Material as TimberMaterial;
         // The material holds NaN for βn where Table 3.1 does not cover its product and density.
         return mat is not null && member.SectionKind == SectionKind.SolidRectangle && !actions.HasInitialBowY && !actions.HasInitialBowZ
             && (_betaNMs is not null || !double.IsNaN(mat.NotionalCharringRateMs));
@@ -137,7 +137,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         if (!v.IsApplicable) return v;
         v = TimberRules.NoInitialBow(actions, Name);
         if (!v.IsApplicable) return v;
-        var mat = (TimberMaterial)member.Member.Material;
+        var mat = (TimberMaterial)member.Material;
         if (_betaNMs is null && En1995Factors.CharringCoverage(mat.Product, mat.RhokKgM3) is { } why) return Applicability.NotApplicable(why);
         throw new UnreachableException("Covers refused what every rule admits.");   // the two lists must agree
     }
@@ -245,7 +245,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     /// <see cref="Check"/> calls it for untraced checks and builds the result itself.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
-        IsPureCompression(actions) ? CompressionNumbers(member, actions, (TimberMaterial)member.Member.Material, ref numbers) : null;
+        IsPureCompression(actions) ? CompressionNumbers(member, actions, (TimberMaterial)member.Material, ref numbers) : null;
 
     /// <summary>The applicability test and <see cref="Numbers"/> in one pass, for <see cref="Check"/>'s untraced checks: the
     /// material that <see cref="Covers"/> type-tested is handed to the kernel as it is, instead of being read from the member
@@ -309,7 +309,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     [MethodImpl(MethodImplOptions.NoInlining)]
     private void TraceCompression(CalculationTrace trace, in ResolvedMember member, in ResolvedActions actions)
     {
-        var mat = (TimberMaterial)member.Member.Material;
+        var mat = (TimberMaterial)member.Material;
         var i = default(Ec5Input);
         Input(member, actions, mat, _tReqS, ref i, out double def, out double bFi, out double hFi, out _, out _);
         Ec5Kernel.Run(i, out var o);
@@ -324,7 +324,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     [MethodImpl(MethodImplOptions.NoInlining)]
     internal CheckResult EvaluateGeneral(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
-        var mat = (TimberMaterial)member.Member.Material;
+        var mat = (TimberMaterial)member.Material;
         var i = default(Ec5Input);
         bool alive = Input(member, actions, mat, _tReqS, ref i, out double def, out double bFi, out double hFi, out double shZ, out double shY);
         var o = default(Ec5Output);

@@ -243,7 +243,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private bool Covers(in ResolvedMember member, in ResolvedActions actions, double r1, double r2, [NotNullWhen(true)] out NdsTimberMaterial? mat)
     {
-        mat = member.Member.Material as NdsTimberMaterial;
+        mat = member.Material as NdsTimberMaterial;
         var kind = member.SectionKind;
         if (mat is null || (kind != SectionKind.SolidRectangle && kind != SectionKind.SolidCircle) || actions.HasInitialBowY || actions.HasInitialBowZ
             || ((Format == NdsDesignFormat.Asd ? _cd : _lambda) is null && actions.LoadDuration == LoadDurationClass.Unspecified))
@@ -265,7 +265,7 @@ public sealed class NdsColumnStability : IResistanceMethod
     [MethodImpl(MethodImplOptions.NoInlining)]
     private Applicability Refusal(in ResolvedMember member, in ResolvedActions actions)
     {
-        if (member.Member.Material is not NdsTimberMaterial) return NotNds(member.Member.Material);
+        if (member.Material is not NdsTimberMaterial) return NotNds(member.Material);
         var v = TimberRules.SolidSection(member, Name, allowCircle: true);
         if (!v.IsApplicable) return v;
         v = TimberRules.NoInitialBow(actions, Name);
@@ -333,7 +333,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         Slenderness(member, out double d1, out double d2, out double r1, out double r2);
         NdsTimberMaterial? mat;
         if (typeof(TEntry) == typeof(CheckEntry)) { if (!Covers(member, actions, r1, r2, out mat)) return null; }
-        else mat = (NdsTimberMaterial)member.Member.Material;
+        else mat = (NdsTimberMaterial)member.Material;
         var adj = Adjustments;
         bool asd = Format == NdsDesignFormat.Asd;
         double cd = asd ? _cd ?? CdFor(actions.LoadDuration) : 1.0;

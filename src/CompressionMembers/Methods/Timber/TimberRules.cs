@@ -20,7 +20,7 @@ internal static class TimberRules
     // building into the caller's loop, with its spills and its share of the inlining budget).
 
     internal static Applicability EuropeanMaterial(in ResolvedMember m, string method) =>
-        m.Member.Material is TimberMaterial ? Applicability.Applicable : NotEuropean(m.Member.Material, method);
+        m.Material is TimberMaterial ? Applicability.Applicable : NotEuropean(m.Material, method);
 
     [MethodImpl(MethodImplOptions.NoInlining)]
     private static Applicability NotEuropean(Material mat, string method) => mat is NdsTimberMaterial
@@ -31,7 +31,7 @@ internal static class TimberRules
     {
         var k = m.SectionKind;
         if (k == SectionKind.SolidRectangle || (allowCircle && k == SectionKind.SolidCircle)) return Applicability.Applicable;
-        return NotSolid(m.Member.Section.Designation, k, method, allowCircle);
+        return NotSolid(m.Section.Designation, k, method, allowCircle);
     }
 
     [MethodImpl(MethodImplOptions.NoInlining)]
@@ -124,5 +124,5 @@ internal static class TimberRules
         _ => "LVL",
     };
 
-    internal static Material MaterialOf(in ResolvedMember m) => m.Member.Material;
+    internal static Material MaterialOf(in ResolvedMember m) => m.Material;
 }

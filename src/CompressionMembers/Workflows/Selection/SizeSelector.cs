@@ -4,6 +4,9 @@ using System.Collections.Generic;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials;
 using CompressionMembers.Methods;
+using CompressionMembers.Methods.Aluminium;
+using CompressionMembers.Methods.Classical;
+using CompressionMembers.Methods.Timber;
 using CompressionMembers.Resolution;
 using CompressionMembers.Results;
 using CompressionMembers.Workflows.Batch;
@@ -125,6 +128,15 @@ public sealed class SizeSelector
         return BatchEvaluator.Run(requests, (r, _) => SelectExhaustively(r), options);
     }
 
+    /// <summary>Whether the selector resolves candidate sections for <paramref name="method"/> without building a member
+    /// each (<see cref="ResolvedMember.WithSection"/>: the same bits as <c>From(member.WithSection(section))</c>, no
+    /// allocation): the built-in methods whose untraced checks read the member's material and section from the resolved
+    /// member and nothing else from the member object. Any other method — a user's, a wrapper around a built-in one, or a
+    /// numerical method, which reads the restraint — gets a real member for every candidate.</summary>
+    internal static bool ResolvesWithoutMember(IResistanceMethod method) =>
+        method is EulerBuckling or JohnsonParabola or SecantFormula or PerryRobertson or Ec5ColumnStability or Ec5FireReducedSection
+            or NdsColumnStability or Eurocode9Compression or BucklingConstantMethod or TangentModulusColumn;
+
     private Plan PlanFor(Material material) => _plans.GetOrAdd(material, m => new Plan(Catalogue, Objective, m));
 
     /// <summary>The entries ordered by objective and split into dominance chains, for one material.</summary>
@@ -193,6 +205,7 @@ public sealed class SizeSelector
         {
             _s = s;
             _request = request;
+            _withoutMember = ResolvesWithoutMember(s.Method);
             _plan = s.PlanFor(request.Member.Material);
             _cases = new ResolvedActions[request.Cases.Count];
             for (int i = 0; i < _cases.Length; i++) _cases[i] = ResolvedActions.From(request.Cases[i]);
@@ -217,6 +230,11 @@ public sealed class SizeSelector
             if (_ownsScratch) t_inUse = true;
         }
 
+        private readonly bool _withoutMember;   // see ResolvesWithoutMember
+
+        private ResolvedMember Candidate(Sections.Section section) =>
+            _withoutMember ? ResolvedMember.WithSection(_request.Member.Resolved, section) : ResolvedMember.From(_request.Member.WithSection(section));
+
         [ThreadStatic] private static sbyte[]? t_state;
         [ThreadStatic] private static SizingCandidate?[]? t_verified;
         [ThreadStatic] private static bool t_inUse;
@@ -234,7 +252,7 @@ public sealed class SizeSelector
         private sbyte Probe(int i)
         {
             if (_state[i] != Unknown) return _state[i];
-            var rm = ResolvedMember.From(_request.Member.WithSection(_s.Catalogue.Entries[i].Section));
+            var rm = Candidate(_s.Catalogue.Entries[i].Section);
             sbyte st = Pass;
             for (int c = 0; c < _cases.Length; c++)
             {
@@ -252,7 +270,7 @@ public sealed class SizeSelector
         {
             if (_verified[i] is { } v) return v;
             var entry = _s.Catalogue.Entries[i];
-            var rm = ResolvedMember.From(_request.Member.WithSection(entry.Section));
+            var rm = Candidate(entry.Section);
             double worst = double.NegativeInfinity, resistance = 0;
             string governing = "";
             for (int c = 0; c < _cases.Length; c++)
