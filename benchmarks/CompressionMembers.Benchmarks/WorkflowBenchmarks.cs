@@ -5,7 +5,9 @@ using CompressionMembers.Actions;
 using CompressionMembers.Materials;
 using CompressionMembers.Members;
 using CompressionMembers.Methods;
+using CompressionMembers.Resolution;
 using CompressionMembers.Restraints;
+using CompressionMembers.Results;
 using CompressionMembers.Sections;
 using CompressionMembers.Workflows.Batch;
 using CompressionMembers.Workflows.Catalogues;
@@ -25,7 +27,7 @@ namespace CompressionMembers.Benchmarks;
 [MemoryDiagnoser]
 public class WorkflowBenchmarks
 {
-    private SizeSelector _selector = null!;
+    private SizeSelector _selector = null!, _withMembers = null!;
     private SizingRequest[] _requests = [];
 
     /// <summary>Members to size.</summary>
@@ -41,6 +43,9 @@ public class WorkflowBenchmarks
     {
         var catalogue = SyntheticCatalogue.Scaled(Sections);
         _selector = new SizeSelector(catalogue, ResistanceMethods.Johnson, SelectionObjective.Mass, candidateCount: 1);
+        // The same method behind a forwarding wrapper, which the selector treats as a user's method: a member is built for
+        // every candidate section (as for every method before candidates were resolved without one).
+        _withMembers = new SizeSelector(catalogue, new Forwarding(ResistanceMethods.Johnson), SelectionObjective.Mass, candidateCount: 1);
         var rnd = new Random(2026);
         var placeholder = new RectangleSection(Length.FromMillimeters(10), Length.FromMillimeters(10));
         var list = new List<SizingRequest>(Members);
@@ -54,11 +59,15 @@ public class WorkflowBenchmarks
 
         var pruned = _selector.SelectAll(_requests, new BatchOptions(2));
         var brute = _selector.SelectAllExhaustively(_requests, new BatchOptions(2));
+        var withMembers = _withMembers.SelectAll(_requests, new BatchOptions(2));
         long pe = 0, be = 0;
         for (int i = 0; i < _requests.Length; i++)
         {
             if (pruned[i].Chosen?.Entry.Designation != brute[i].Chosen?.Entry.Designation)
                 throw new InvalidOperationException($"Pruned and brute-force searches disagree for {_requests[i].Member.Name}.");
+            if (pruned[i].Chosen?.Entry.Designation != withMembers[i].Chosen?.Entry.Designation
+                || pruned[i].Chosen?.Utilisation.Equals(withMembers[i].Chosen?.Utilisation) == false || pruned[i].Evaluations != withMembers[i].Evaluations)
+                throw new InvalidOperationException($"Candidates resolved with and without members disagree for {_requests[i].Member.Name}.");
             pe += pruned[i].Evaluations;
             be += brute[i].Evaluations;
         }
@@ -72,6 +81,12 @@ public class WorkflowBenchmarks
     public int PrunedTwoCores() => Count(_selector.SelectAll(_requests, new BatchOptions(2)));
 
     [Benchmark]
+    public int PrunedOneCoreMemberPerCandidate() => Count(_withMembers.SelectAll(_requests, BatchOptions.Serial));
+
+    [Benchmark]
+    public int PrunedTwoCoresMemberPerCandidate() => Count(_withMembers.SelectAll(_requests, new BatchOptions(2)));
+
+    [Benchmark]
     public int BruteForceOneCore() => Count(_selector.SelectAllExhaustively(_requests, BatchOptions.Serial));
 
     [Benchmark]
@@ -82,6 +97,13 @@ public class WorkflowBenchmarks
         int found = 0;
         foreach (var x in s) if (x.Found) found++;
         return found;
+    }
+
+    private sealed class Forwarding(IResistanceMethod inner) : IResistanceMethod
+    {
+        public MethodIdentity Identity => inner.Identity;
+        public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) => inner.AppliesTo(member, actions);
+        public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace) => inner.Evaluate(member, actions, trace);
     }
 }
 
