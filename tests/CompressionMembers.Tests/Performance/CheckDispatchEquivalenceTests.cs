@@ -9,6 +9,7 @@ using CompressionMembers.Methods.Timber;
 using CompressionMembers.Restraints;
 using CompressionMembers.Results;
 using CompressionMembers.Sections;
+using CompressionMembers.Tests.Support;
 using CsCheck;
 using UnitsNet;
 
@@ -49,7 +50,7 @@ public class CheckDispatchEquivalenceTests
                 Gen.Double[10, 150], Gen.Bool)
             .Sample((b, h, l, ci, eMm, exposure, minutes, circle) =>
             {
-                Section s = circle ? new CircleSection(Length.FromMillimeters(b)) : new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h));
+                var s = RandomSections.Timber(b, h, circle);
                 var member = Member.Create(s, Timber[ci], Length.FromMillimeters(l), Restraint.PinnedBothAxes);
                 var actions = DesignActions.Compression(Force.FromKilonewtons(25)).WithLoadDuration(LoadDurationClass.MediumTerm);
                 if (eMm > 20) actions = actions.WithEccentricity(Length.FromMillimeters(eMm - 20), Length.Zero);   // about half with bending
@@ -81,13 +82,7 @@ public class CheckDispatchEquivalenceTests
         Gen.Select(Gen.Double[30, 160], Gen.Double[2, 6], Gen.Double[400, 5000], Gen.Int[0, 3], Gen.Double[0, 20], Gen.Bool)
             .Sample((d, t, l, kind, eMm, weld) =>
             {
-                Section s = kind switch
-                {
-                    0 => new RectangularHollowSection(Length.FromMillimeters(d), Length.FromMillimeters(d * 1.3), Length.FromMillimeters(t)),
-                    1 => new CircularHollowSection(Length.FromMillimeters(d), Length.FromMillimeters(t)),
-                    2 => new RectangleSection(Length.FromMillimeters(d / 3), Length.FromMillimeters(d / 2)),
-                    _ => new ChannelSection(Length.FromMillimeters(d), Length.FromMillimeters(d / 2), Length.FromMillimeters(t), Length.FromMillimeters(t)),
-                };
+                var s = RandomSections.Aluminium(kind, d, t);
                 var member = Member.Create(s, AluminiumAlloys.EnAw6082T6Extrusion, Length.FromMillimeters(l), Restraint.PinnedBothAxes);
                 var actions = DesignActions.Compression(Force.FromKilonewtons(15));
                 if (eMm > 10) actions = actions.WithEccentricity(Length.Zero, Length.FromMillimeters(eMm - 10));

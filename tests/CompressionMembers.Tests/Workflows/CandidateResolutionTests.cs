@@ -80,7 +80,7 @@ public class CandidateResolutionTests
                 Gen.Double[10, 150], Gen.Bool)
             .Sample((b, h, l, ci, eMm, exposure, minutes, circle) =>
             {
-                Section s = circle ? new CircleSection(Length.FromMillimeters(b)) : new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(h));
+                var s = RandomSections.Timber(b, h, circle);
                 var basis = Member.Create(new RectangleSection(Length.FromMillimeters(90), Length.FromMillimeters(140)), Timber[ci], Length.FromMillimeters(l),
                     Braced(1.0, 0.7));
                 var actions = DesignActions.Compression(Force.FromKilonewtons(25)).WithLoadDuration(LoadDurationClass.MediumTerm);
@@ -113,13 +113,7 @@ public class CandidateResolutionTests
         Gen.Select(Gen.Double[30, 160], Gen.Double[2, 6], Gen.Double[400, 5000], Gen.Int[0, 3], Gen.Double[0, 20])
             .Sample((d, t, l, kind, eMm) =>
             {
-                Section s = kind switch
-                {
-                    0 => new RectangularHollowSection(Length.FromMillimeters(d), Length.FromMillimeters(d * 1.3), Length.FromMillimeters(t)),
-                    1 => new CircularHollowSection(Length.FromMillimeters(d), Length.FromMillimeters(t)),
-                    2 => new RectangleSection(Length.FromMillimeters(d / 3), Length.FromMillimeters(d / 2)),
-                    _ => new ChannelSection(Length.FromMillimeters(d), Length.FromMillimeters(d / 2), Length.FromMillimeters(t), Length.FromMillimeters(t)),
-                };
+                var s = RandomSections.Aluminium(kind, d, t);
                 var basis = Member.Create(new CircularHollowSection(Length.FromMillimeters(60), Length.FromMillimeters(3)), AluminiumAlloys.EnAw6082T6Extrusion,
                     Length.FromMillimeters(l), Restraint.PinnedBothAxes);
                 var actions = DesignActions.Compression(Force.FromKilonewtons(15));
