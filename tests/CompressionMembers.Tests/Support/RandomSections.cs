@@ -1,4 +1,5 @@
 using CompressionMembers.Sections;
+using CsCheck;
 using UnitsNet;
 
 namespace CompressionMembers.Tests.Support;
@@ -20,4 +21,11 @@ internal static class RandomSections
         2 => new RectangleSection(Length.FromMillimeters(dMm / 3), Length.FromMillimeters(dMm / 2)),
         _ => new ChannelSection(Length.FromMillimeters(dMm), Length.FromMillimeters(dMm / 2), Length.FromMillimeters(tMm), Length.FromMillimeters(tMm)),
     };
+
+    /// <summary>Timber inputs: b, h and L in mm, a material index below <paramref name="materials"/>, an eccentricity draw
+    /// in mm (the tests bend above 20), a fire exposure (0–2), a fire duration in minutes and whether the section is a
+    /// circle.</summary>
+    internal static Gen<(double, double, double, int, double, int, double, bool)> TimberCases(int materials) =>
+        Gen.Select(Gen.Double[40, 300], Gen.Double[40, 400], Gen.Double[500, 9000], Gen.Int[0, materials - 1], Gen.Double[0, 40], Gen.Int[0, 2],
+            Gen.Double[10, 150], Gen.Bool);
 }

@@ -76,8 +76,7 @@ public class CandidateResolutionTests
     [Fact]
     public void Timber_RandomCandidates_SameAsARealMember()
     {
-        Gen.Select(Gen.Double[40, 300], Gen.Double[40, 400], Gen.Double[500, 9000], Gen.Int[0, Timber.Length - 1], Gen.Double[0, 40], Gen.Int[0, 2],
-                Gen.Double[10, 150], Gen.Bool)
+        RandomSections.TimberCases(Timber.Length)
             .Sample((b, h, l, ci, eMm, exposure, minutes, circle) =>
             {
                 var s = RandomSections.Timber(b, h, circle);
