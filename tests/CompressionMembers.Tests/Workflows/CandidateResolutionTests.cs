@@ -224,6 +224,8 @@ public class CandidateResolutionTests
         Assert.Equal(400, d.Evaluations);
         Assert.Equal(400, r.Evaluations);
         Assert.True(real - detached >= 400 * 300, $"real members {real} B, detached {detached} B");   // a member each: about 400 B
-        Assert.True(detached < 400 * 16, $"detached {detached} B for 400 candidates");   // 2,376 B when written: not a member each
+        // 2,376 B when written, with code at its first tier; the bound leaves room for the JIT's tiers and still sits far
+        // below a member each (about 160 KB).
+        Assert.True(detached < 400 * 50, $"detached {detached} B for 400 candidates");
     }
 }
