@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Concurrent;
 using System.Collections.Generic;
+using CompressionMembers.Actions;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials;
 using CompressionMembers.Methods;
@@ -195,7 +196,7 @@ public sealed class SizeSelector
         private readonly SizeSelector _s;
         private readonly SizingRequest _request;
         private readonly Plan _plan;
-        private readonly ResolvedActions[] _cases;
+        private readonly DesignActions[] _cases;   // the request's own array; each case's resolved values are read in place
         private readonly sbyte[] _state;
         private readonly SizingCandidate?[] _verified;
         internal int Evaluations;
@@ -207,8 +208,7 @@ public sealed class SizeSelector
             _request = request;
             _withoutMember = ResolvesWithoutMember(s.Method);
             _plan = s.PlanFor(request.Member.Material);
-            _cases = new ResolvedActions[request.Cases.Count];
-            for (int i = 0; i < _cases.Length; i++) _cases[i] = ResolvedActions.From(request.Cases[i]);
+            _cases = request.CaseArray;
             // The per-entry state lives in arrays kept per thread and cleared for each search, so that sizing thousands of
             // members does not allocate (and collect) two catalogue-sized arrays per member; a search nested in another on
             // the same thread (a method that sizes something itself) gets arrays of its own.
@@ -256,7 +256,7 @@ public sealed class SizeSelector
             sbyte st = Pass;
             for (int c = 0; c < _cases.Length; c++)
             {
-                if (!_s.Method.AppliesTo(rm, _cases[c]).IsApplicable) { st = NotApplicable; break; }
+                if (!_s.Method.AppliesTo(rm, _cases[c].Resolved).IsApplicable) { st = NotApplicable; break; }
                 Evaluations++;
                 if (!TryEvaluate(rm, c, i, out var r)) { st = NotApplicable; break; }
                 if (!r.Passed) { st = Fail; break; }
@@ -275,7 +275,7 @@ public sealed class SizeSelector
             string governing = "";
             for (int c = 0; c < _cases.Length; c++)
             {
-                if (!_s.Method.AppliesTo(rm, _cases[c]).IsApplicable) { _state[i] = NotApplicable; return null; }
+                if (!_s.Method.AppliesTo(rm, _cases[c].Resolved).IsApplicable) { _state[i] = NotApplicable; return null; }
                 Evaluations++;
                 if (!TryEvaluate(rm, c, i, out var r)) { _state[i] = NotApplicable; return null; }
                 if (r.Utilisation > worst) { worst = r.Utilisation; governing = r.Actions.Name; resistance = r.DesignResistanceN; }
@@ -296,7 +296,7 @@ public sealed class SizeSelector
             {
                 // The caller has just asked AppliesTo for this case, so the method is evaluated directly (Check.Evaluate
                 // would ask again); the result validates itself when it is built.
-                result = _s.Method.Evaluate(rm, _cases[c], null);
+                result = _s.Method.Evaluate(rm, _cases[c].Resolved, null);
                 return true;
             }
             catch (Exception ex) when (ex is not OperationCanceledException)
@@ -345,14 +345,14 @@ public sealed class SizeSelector
                     Insert(best, chain[j], want);
                 }
             }
-            var result = new List<SizingCandidate>(best.Count);
-            foreach (int i in best)
+            var result = best.Count == 0 ? [] : new SizingCandidate[best.Count];
+            for (int k = 0; k < result.Length; k++)
             {
-                var c = Verify(i);
+                var c = Verify(best[k]);
                 if (c is null) return null; // inferred to pass but fails the real check: not monotone
-                result.Add(c);
+                result[k] = c;
             }
-            return result.ToArray();
+            return result;
         }
 
         /// <summary>The first position in chain[0..limit) whose entry passes, or -1. Binary search on a monotone chain;

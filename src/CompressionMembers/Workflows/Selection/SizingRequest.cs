@@ -40,4 +40,8 @@ public sealed class SizingRequest
 
     /// <summary>The action cases.</summary>
     public IReadOnlyList<DesignActions> Cases => _cases;
+
+    /// <summary>The cases as the request keeps them (never handed out: the selector reads each case's resolved values in
+    /// place, without copying them into an array of its own per search).</summary>
+    internal DesignActions[] CaseArray => _cases;
 }
