@@ -228,4 +228,25 @@ public class CandidateResolutionTests
         // below a member each (about 160 KB).
         Assert.True(detached < 400 * 50, $"detached {detached} B for 400 candidates");
     }
+    [Fact]
+    public void NumericalMethods_GetARealMember_AndSizeWithoutMethodFailures()
+    {
+        // The numerical methods read the member's restraint, so the selector must build a member for each candidate: a
+        // candidate without one would make the method throw, which the selector would count as a method failure and skip
+        // the section, not crash. Both must size a bar with no failures and agree with the exhaustive search.
+        var catalogue = SectionCatalogue.Create("square bars", "invented for tests",
+            new[] { 20.0, 25, 30, 40 }.Select(b => new CatalogueEntry($"bar {b}", new RectangleSection(Length.FromMillimeters(b), Length.FromMillimeters(b)), "bar")));
+        var request = new SizingRequest(WorkflowFixtures.Column(2000), DesignActions.Compression(Force.FromKilonewtons(20)));
+        foreach (var method in new IResistanceMethod[] { ResistanceMethods.FiniteElementCritical, ResistanceMethods.SecondOrderElastic })
+        {
+            Assert.False(SizeSelector.ResolvesWithoutMember(method), method.Identity.Name);
+            var selector = new SizeSelector(catalogue, method);
+            var pruned = selector.Select(request);
+            var exhaustive = selector.SelectExhaustively(request);
+            Assert.Equal(0, pruned.MethodFailures);
+            Assert.Equal(0, exhaustive.MethodFailures);
+            Assert.True(pruned.Found, method.Identity.Name);
+            Assert.Equal(exhaustive.Chosen!.Entry.Designation, pruned.Chosen!.Entry.Designation);
+        }
+    }
 }
