@@ -228,7 +228,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
         Unsafe.SkipInit(out CheckNumbers numbers);
-        string? check = Numbers(member, actions, ref numbers);
+        string? check = Numbers(member, actions, (TimberMaterial)member.Material, ref numbers);
         if (check is null) return EvaluateGeneral(member, actions, trace);
         if (trace is not null) TraceCompression(trace, member, actions);
         return numbers.ToResult(member, actions, this, check, trace);
@@ -242,10 +242,11 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
 
     /// <summary>The straight-line path's numbers, or null with moments, once the section has burnt away, or for numbers a
     /// result refuses (then <see cref="EvaluateGeneral"/>, which reports either). For a member the method applies to;
-    /// <see cref="Check"/> calls it for untraced checks and builds the result itself.</summary>
+    /// <see cref="Check"/> calls it for untraced checks (through <see cref="ApplicableNumbers"/>) and builds the result
+    /// itself.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
-        IsPureCompression(actions) ? CompressionNumbers(member, actions, (TimberMaterial)member.Material, ref numbers) : null;
+    internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat, ref CheckNumbers numbers) =>
+        IsPureCompression(actions) ? CompressionNumbers(member, actions, mat, ref numbers) : null;
 
     /// <summary>The applicability test and <see cref="Numbers"/> in one pass, for <see cref="Check"/>'s untraced checks: the
     /// material that <see cref="Covers"/> type-tested is handed to the kernel as it is, instead of being read from the member
@@ -259,7 +260,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
             return null;
         }
         verdict = Applicability.Applicable;
-        return IsPureCompression(actions) ? CompressionNumbers(member, actions, mat, ref numbers) : null;
+        return Numbers(member, actions, mat, ref numbers);
     }
 
     /// <summary>The compression path's numbers; returns the governing check's words, or null when the residual section has

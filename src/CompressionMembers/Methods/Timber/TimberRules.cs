@@ -123,6 +123,4 @@ internal static class TimberRules
         TimberProduct.GlulamCombined => "combined glulam",
         _ => "LVL",
     };
-
-    internal static Material MaterialOf(in ResolvedMember m) => m.Material;
 }

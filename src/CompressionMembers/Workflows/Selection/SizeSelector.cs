@@ -54,6 +54,7 @@ public sealed class SizeSelector
             throw new ArgumentOutOfRangeException(nameof(candidateCount), candidateCount, $"The candidate count must be at least 1; got {candidateCount}.");
         Catalogue = catalogue;
         Method = method;
+        _withoutMember = ResolvesWithoutMember(method);
         Objective = objective ?? SelectionObjective.Area;
         CandidateCount = candidateCount;
     }
@@ -138,6 +139,8 @@ public sealed class SizeSelector
         method is EulerBuckling or JohnsonParabola or SecantFormula or PerryRobertson or Ec5ColumnStability or Ec5FireReducedSection
             or NdsColumnStability or Eurocode9Compression or BucklingConstantMethod or TangentModulusColumn;
 
+    private readonly bool _withoutMember;   // ResolvesWithoutMember(Method), decided once
+
     private Plan PlanFor(Material material) => _plans.GetOrAdd(material, m => new Plan(Catalogue, Objective, m));
 
     /// <summary>The entries ordered by objective and split into dominance chains, for one material.</summary>
@@ -206,7 +209,6 @@ public sealed class SizeSelector
         {
             _s = s;
             _request = request;
-            _withoutMember = ResolvesWithoutMember(s.Method);
             _plan = s.PlanFor(request.Member.Material);
             _cases = request.CaseArray;
             // The per-entry state lives in arrays kept per thread and cleared for each search, so that sizing thousands of
@@ -230,10 +232,8 @@ public sealed class SizeSelector
             if (_ownsScratch) t_inUse = true;
         }
 
-        private readonly bool _withoutMember;   // see ResolvesWithoutMember
-
         private ResolvedMember Candidate(Sections.Section section) =>
-            _withoutMember ? ResolvedMember.WithSection(_request.Member.Resolved, section) : ResolvedMember.From(_request.Member.WithSection(section));
+            _s._withoutMember ? ResolvedMember.WithSection(_request.Member.Resolved, section) : ResolvedMember.From(_request.Member.WithSection(section));
 
         [ThreadStatic] private static sbyte[]? t_state;
         [ThreadStatic] private static SizingCandidate?[]? t_verified;
