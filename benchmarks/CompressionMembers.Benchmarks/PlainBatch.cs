@@ -9,7 +9,7 @@ namespace CompressionMembers.Benchmarks;
 /// <summary>
 /// The two-core speed-up of the batches measured in one process, without BenchmarkDotNet's engine: for each workload,
 /// rounds of the serial run, the two-core run and — the machine's own ceiling — two serial runs at once on two threads
-/// (independent copies of the workload that share nothing but read-only inputs), alternating round by round so that the
+/// (two independent runs over the same inputs, each writing results of its own), alternating round by round so that the
 /// machine's drift touches all three alike. BenchmarkDotNet times the one-core and two-core benchmarks in processes
 /// minutes apart, and on a machine whose speed drifts by a third within minutes their ratio is then mostly drift.
 /// Not a test and not run by CI.
@@ -19,7 +19,8 @@ namespace CompressionMembers.Benchmarks;
 /// Per workload: the medians of the three times, <c>batch</c> = one core ÷ two cores, and <c>ceiling</c> = 2 × one core ÷
 /// the two copies at once (2.0 when two threads do not slow each other at all), and <c>batch / ceiling</c>, the share of
 /// what the machine gives two threads that the batch turns into speed-up, round by round. Workloads may be named
-/// (<c>checks</c>, <c>results</c>, <c>selection</c>, <c>schedule</c>); no name means all four.
+/// (<c>checks</c>, <c>checks10</c> — the same checks ten times over in one call —, <c>results</c>, <c>selection</c>,
+/// <c>schedule</c>); no name means all five.
 /// </remarks>
 internal static class PlainBatch
 {
@@ -36,7 +37,7 @@ internal static class PlainBatch
             if (args[i] == "--rounds" && i + 1 < args.Length) rounds = int.Parse(args[++i], CultureInfo.InvariantCulture);
             else names.Add(args[i].ToLowerInvariant());
         }
-        if (names.Count == 0) names.AddRange(["checks", "results", "selection", "schedule"]);
+        if (names.Count == 0) names.AddRange(["checks", "checks10", "results", "selection", "schedule"]);
         Console.WriteLine($"Plain batch: one core, two cores and two serial copies at once, alternating, {rounds} rounds per workload; medians, ms per run.");
         Console.WriteLine("batch = one core / two cores; ceiling = 2 x one core / two copies at once (what two cores give two independent runs here).");
         foreach (var name in names)
@@ -47,19 +48,22 @@ internal static class PlainBatch
         return 0;
     }
 
-    // Each workload gets two benchmark objects: the second is the independent copy for the ceiling, so that the two
-    // copies write to arrays of their own (no cache line shared between the threads).
+    // The two copies of the ceiling read the same inputs, as the two threads of the batch do, and write results of their
+    // own (no cache line written by both threads): the check sweeps through a second benchmark object with arrays of its
+    // own; size selection and the schedule return new results from every run.
     private static Workload Build(string name)
     {
         switch (name)
         {
             case "checks":
+            case "checks10":
             case "results":
             {
-                var a = new CheckBatchBenchmarks(); a.Setup();
-                var b = new CheckBatchBenchmarks(); b.Setup();
-                return name == "checks"
-                    ? new Workload(name, "200,000 EN 1995-1-1 checks, (u, N) into a reused array",
+                int repeat = name == "checks10" ? 10 : 1;
+                var a = new CheckBatchBenchmarks { Repeat = repeat }; a.Setup();
+                var b = a.SharingInputs();
+                return name != "results"
+                    ? new Workload(name, string.Create(CultureInfo.InvariantCulture, $"{200_000 * repeat:N0} EN 1995-1-1 checks, (u, N) into a reused array"),
                         () => Sink(a.NumbersOneCore()), () => Sink(a.NumbersTwoCores()), () => Sink(b.NumbersOneCore()))
                     : new Workload(name, "200,000 EN 1995-1-1 checks, full results into a reused array",
                         () => Sink(a.OneCore()), () => Sink(a.TwoCores()), () => Sink(b.OneCore()));
@@ -67,18 +71,16 @@ internal static class PlainBatch
             case "selection":
             {
                 var a = new WorkflowBenchmarks { Members = 10_000, Sections = 1_000 }; a.Setup();
-                var b = new WorkflowBenchmarks { Members = 10_000, Sections = 1_000 }; b.Setup();
                 return new Workload(name, "size selection, 10,000 members x 1,000 sections, pruned",
-                    a.PrunedOneCore, a.PrunedTwoCores, b.PrunedOneCore);
+                    a.PrunedOneCore, a.PrunedTwoCores, a.PrunedOneCore);   // each run returns a list of its own
             }
             case "schedule":
             {
                 var a = new ScheduleBatchBenchmarks(); a.Setup();
-                var b = new ScheduleBatchBenchmarks(); b.Setup();
-                return new Workload(name, "schedule of 10,000 rows checked in memory", a.OneCore, a.TwoCores, b.OneCore);
+                return new Workload(name, "schedule of 10,000 rows checked in memory", a.OneCore, a.TwoCores, a.OneCore);   // likewise
             }
             default:
-                throw new ArgumentException($"No workload \"{name}\"; the workloads are checks, results, selection and schedule.");
+                throw new ArgumentException($"No workload \"{name}\"; the workloads are checks, checks10, results, selection and schedule.");
         }
     }
 
