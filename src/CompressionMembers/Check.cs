@@ -75,16 +75,17 @@ public static class Check
 
     // The applicability test, then the method. Through the interface, the runtime devirtualises the two calls by guessing
     // the method's class from a profile of this call site, which every caller of Check shares: in a process that had
-    // checked several methods, a loop over one timber or aluminium method ran with the wrong guess (measured: EN 1995-1-2
-    // 2.4x and NDS 2.1x the hand-written loop, against 1.5x and 1.2x alone; docs/performance.md). Those methods (sealed
-    // classes) are therefore recognised by a type test and called directly. The classical methods stay on the interface
-    // path, written first so that the JIT spends its inlining budget there first: their short checks gain most from
-    // being inlined whole into the caller's loop, and a type switch over every method left them as calls.
+    // checked several methods, a loop over one method ran with the wrong guess (measured: EN 1995-1-2 2.4x and NDS 2.1x
+    // the hand-written loop, against 1.5x and 1.2x alone; Euler 1.8-3.2x after a fire check; docs/performance.md). The
+    // built-in closed forms (sealed classes) are therefore recognised by a type test and called directly, so that their
+    // speed does not depend on what else the process has checked. Only the secant and tangent-modulus methods (a root
+    // search of hundreds of nanoseconds, against which a call is nothing), the numerical models and a user's own methods
+    // stay on the interface path.
     //
-    // The straight-line paths of those five methods write their numbers (CheckNumbers: no references) and the result is
-    // built here, once for all five, inlined into the caller: a method that returned the 240-byte result built it in a
+    // The straight-line paths of those eight methods write their numbers (CheckNumbers: no references) and the result is
+    // built here, once for all, inlined into the caller: a method that returned the 240-byte result built it in a
     // zeroed temporary and copied it over, which cost a fire check about a fifth of its time (docs/performance.md, third
-    // round). For an untraced check each of the five calls a kernel that calls nothing (fourth round): it returns null
+    // round). For an untraced check each of the eight calls a kernel that calls nothing (fourth round): it returns null
     // for everything it does not compute itself — a path beside the straight line, numbers a result refuses, and for
     // NDS, which tests its own applicability, a refusal — and OtherPath hands those to the method (its Evaluate or
     // general path, which write the steps, refuse or throw). Traced checks of EN 1995-1-2 and NDS go there too.
@@ -92,7 +93,8 @@ public static class Check
     private static CheckResult Run(in ResolvedMember rm, in ResolvedActions ra, IResistanceMethod method, CalculationTrace? trace)
     {
         Applicability verdict;
-        if (method is not (Ec5ColumnStability or Ec5FireReducedSection or NdsColumnStability or Eurocode9Compression or BucklingConstantMethod))
+        if (method is not (Ec5ColumnStability or Ec5FireReducedSection or NdsColumnStability or Eurocode9Compression or BucklingConstantMethod
+            or EulerBuckling or JohnsonParabola or PerryRobertson))
         {
             if ((verdict = method.AppliesTo(rm, ra)).IsApplicable) return method.Evaluate(rm, ra, trace);
             return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
@@ -116,7 +118,16 @@ public static class Check
             case BucklingConstantMethod m:
                 check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
                 break;
-            default: throw new UnreachableException();   // the type test above admitted only these five
+            case EulerBuckling m:
+                check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
+                break;
+            case JohnsonParabola m:
+                check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
+                break;
+            case PerryRobertson m:
+                check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
+                break;
+            default: throw new UnreachableException();   // the type test above admitted only these eight
         }
         if (!verdict.IsApplicable) return ThrowNotApplicable(method, rm.Member, verdict.Reason!);
         return check is not null ? numbers.ToResult(rm, ra, method, check, trace) : OtherPath(rm, ra, method, trace);
@@ -132,7 +143,8 @@ public static class Check
             Ec5FireReducedSection m => m.Evaluate(rm, ra, trace),   // applicability tested in Run
             NdsColumnStability m => m.AppliesTo(rm, ra) is { IsApplicable: false } v ? ThrowNotApplicable(method, rm.Member, v.Reason!) : m.Evaluate(rm, ra, trace),
             Eurocode9Compression m => m.EvaluateGeneral(rm, ra, trace),
-            Ec5ColumnStability or BucklingConstantMethod => method.Evaluate(rm, ra, trace),   // numbers a result refuses
+            Ec5ColumnStability or BucklingConstantMethod or EulerBuckling or JohnsonParabola or PerryRobertson
+                => method.Evaluate(rm, ra, trace),   // numbers a result refuses
             _ => throw new UnreachableException(),
         };
 

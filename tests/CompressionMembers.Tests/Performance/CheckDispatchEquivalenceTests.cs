@@ -5,6 +5,7 @@ using CompressionMembers.Materials.Timber;
 using CompressionMembers.Members;
 using CompressionMembers.Methods;
 using CompressionMembers.Methods.Aluminium;
+using CompressionMembers.Methods.Classical;
 using CompressionMembers.Methods.Timber;
 using CompressionMembers.Restraints;
 using CompressionMembers.Results;
@@ -16,7 +17,8 @@ using UnitsNet;
 namespace CompressionMembers.Tests.Performance;
 
 /// <summary>
-/// <see cref="Check"/> dispatches the five timber and aluminium code methods itself: it picks their straight-line path,
+/// <see cref="Check"/> dispatches the five timber and aluminium code methods and the three classical closed forms (Euler,
+/// Johnson, Perry–Robertson) itself: it picks their straight-line path,
 /// has it write the check's numbers and builds the result in line (docs/performance.md, third round); every other path
 /// goes to the method. Whatever the path, the result must be the one the method's own <c>Evaluate</c> returns, to the
 /// last bit, with the same governing check and the same steps, traced and untraced. Inputs are random (CsCheck) and
@@ -88,6 +90,30 @@ public class CheckDispatchEquivalenceTests
                 return SameAsTheMethod(member, actions, weld ? welded : ResistanceMethods.Eurocode9)
                     && SameAsTheMethod(member, actions, ResistanceMethods.AluminiumBucklingConstantsLrfd)
                     && SameAsTheMethod(member, actions, ResistanceMethods.AluminiumBucklingConstantsAsd);
+            }, seed: Trust.PropertyTests.Seed, threads: 1);
+    }
+
+    [Fact]
+    public void Classical_RandomMembersAndActions_CheckGivesTheMethodsOwnResult()
+    {
+        // Stocky bars (the squash load governs Euler), slender ones (the Euler hyperbola beyond Johnson's Cc), I-sections
+        // and tubes of generic steel and aluminium; about a fifth eccentric, which the three methods refuse.
+        var materials = new Materials.Material[] { Fixtures.Steel, Materials.Aluminium.AluminiumAlloys.EnAw6082T6Extrusion };
+        var perry = new IResistanceMethod[]
+        {
+            ResistanceMethods.PerryRobertsonDefault, ResistanceMethods.PerryRobertson(PerryImperfection.Constant(0.3)),
+            ResistanceMethods.PerryRobertson(PerryImperfection.FromBowRatio(1000)), ResistanceMethods.PerryRobertson(PerryImperfection.FromActions),
+        };
+        Gen.Select(Gen.Double[30, 160], Gen.Double[2, 6], Gen.Double[100, 9000], Gen.Int[0, 3], Gen.Double[0, 25], Gen.Int[0, 1], Gen.Int[0, perry.Length - 1])
+            .Sample((d, t, l, kind, eMm, mi, pi) =>
+            {
+                var s = RandomSections.Aluminium(kind, d, t);
+                var member = Member.Create(s, materials[mi], Length.FromMillimeters(l), Restraint.PinnedBothAxes);
+                var actions = DesignActions.Compression(Force.FromKilonewtons(40)).WithInitialBow(Length.FromMillimeters(l / 500), Length.FromMillimeters(l / 700));
+                if (eMm > 20) actions = actions.WithEccentricity(Length.FromMillimeters(eMm - 20), Length.Zero);
+                return SameAsTheMethod(member, actions, ResistanceMethods.Euler)
+                    && SameAsTheMethod(member, actions, ResistanceMethods.Johnson)
+                    && SameAsTheMethod(member, actions, perry[pi]);
             }, seed: Trust.PropertyTests.Seed, threads: 1);
     }
 }

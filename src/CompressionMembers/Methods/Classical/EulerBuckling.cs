@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Internal;
 using CompressionMembers.Methods.Common;
 using CompressionMembers.Resolution;
@@ -31,33 +32,66 @@ public sealed class EulerBuckling : IResistanceMethod
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = Numbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The check's numbers (validated), traced or not; returns the governing check's words. The method's own
+    /// <see cref="Evaluate"/> and Check's traced checks take it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        Kernel<MethodEntry>(member, actions, trace, ref numbers)!;
+
+    /// <summary>Check's entry for an untraced check: the numbers, compiled without the steps; null for numbers a result
+    /// refuses (Check then takes <see cref="Evaluate"/>, which throws for them).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        Kernel<CheckEntry>(member, actions, null, ref numbers);
+
+    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+        where TEntry : struct
+    {
         var y = new AxisData(member, BucklingAxis.Y);
         var z = new AxisData(member, BucklingAxis.Z);
         double squash = member.AreaM2 * member.StrengthPa;
-        if (trace is not null)
-        {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Material.Source);
-            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Material.Source);
-            TraceCommon.SectionAndLengths(trace, member);
-            TraceCommon.Slenderness(trace, y, Ref);
-            TraceCommon.Slenderness(trace, z, Ref);
-            trace.Add("Npl", "squash load", "A f", squash, StepUnit.Force, "common practice");
-        }
+        bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
+        if (traced) TraceAxes(trace!, member, y, z, squash);
         var gov = y.CriticalForceN <= z.CriticalForceN ? y : z;
         double capacity = Math.Min(gov.CriticalForceN, squash);
         bool yields = squash < gov.CriticalForceN;
         double u = actions.AxialForceN / capacity;
-        if (trace is not null)
-        {
-            trace.Add("N", "nominal capacity", "min(Ncr,y, Ncr,z, Npl)", capacity, StepUnit.Force, Ref);
-            if (yields) trace.Note("The squash load is below the Euler load: the member yields before it buckles elastically; Euler alone would overestimate it.", "common practice");
-            ClassicalRules.Verdict(trace, actions.AxialForceN, capacity, u);
-        }
-        return new CheckResult(member, actions, this, capacity, u,
-            yields ? BucklingAxis.None : gov.Axis, yields ? FailureMode.Yielding : FailureMode.FlexuralBuckling,
-            yields ? "squash load A·f (below the Euler load)" : "Euler critical load",
-            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), y.CriticalForceN, double.NaN, Math.Min(y.CriticalForceN, squash)),
-            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), z.CriticalForceN, double.NaN, Math.Min(z.CriticalForceN, squash)),
-            default, trace);
+        if (traced) TraceVerdict(trace!, actions.AxialForceN, capacity, u, yields);
+        numbers.DesignResistanceN = capacity;
+        numbers.Utilisation = u;
+        numbers.GoverningAxis = yields ? BucklingAxis.None : gov.Axis;
+        numbers.GoverningMode = yields ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
+        numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), y.CriticalForceN, double.NaN, Math.Min(y.CriticalForceN, squash));
+        numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), z.CriticalForceN, double.NaN, Math.Min(z.CriticalForceN, squash));
+        numbers.Torsional = default;
+        if (!numbers.Accepted<TEntry>(this, member)) return null;
+        return yields ? "squash load A·f (below the Euler load)" : "Euler critical load";
+    }
+
+    // The steps, in methods of their own so that the untraced kernel carries none of their string building.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceAxes(CalculationTrace trace, in ResolvedMember member, in AxisData y, in AxisData z, double squash)
+    {
+        trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Material.Source);
+        trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Material.Source);
+        TraceCommon.SectionAndLengths(trace, member);
+        TraceCommon.Slenderness(trace, y, Ref);
+        TraceCommon.Slenderness(trace, z, Ref);
+        trace.Add("Npl", "squash load", "A f", squash, StepUnit.Force, "common practice");
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceVerdict(CalculationTrace trace, double demandN, double capacityN, double u, bool yields)
+    {
+        trace.Add("N", "nominal capacity", "min(Ncr,y, Ncr,z, Npl)", capacityN, StepUnit.Force, Ref);
+        if (yields) trace.Note("The squash load is below the Euler load: the member yields before it buckles elastically; Euler alone would overestimate it.", "common practice");
+        ClassicalRules.Verdict(trace, demandN, capacityN, u);
     }
 }

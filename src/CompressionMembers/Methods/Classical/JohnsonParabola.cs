@@ -1,4 +1,5 @@
 using System;
+using System.Runtime.CompilerServices;
 using CompressionMembers.Internal;
 using CompressionMembers.Methods.Common;
 using CompressionMembers.Resolution;
@@ -46,35 +47,69 @@ public sealed class JohnsonParabola : IResistanceMethod
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = Numbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The check's numbers (validated), traced or not; returns the governing check's words. The method's own
+    /// <see cref="Evaluate"/> and Check's traced checks take it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        Kernel<MethodEntry>(member, actions, trace, ref numbers)!;
+
+    /// <summary>Check's entry for an untraced check: the numbers, compiled without the steps; null for numbers a result
+    /// refuses (Check then takes <see cref="Evaluate"/>, which throws for them).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        Kernel<CheckEntry>(member, actions, null, ref numbers);
+
+    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+        where TEntry : struct
+    {
         var y = new AxisData(member, BucklingAxis.Y);
         var z = new AxisData(member, BucklingAxis.Z);
         double e = member.ElasticModulusPa, f = member.StrengthPa, a = member.AreaM2;
-        double cc = TransitionSlenderness(e, f);
         double sy = CriticalStress(y.Slenderness, e, f, out bool jy);
         double sz = CriticalStress(z.Slenderness, e, f, out bool jz);
-        if (trace is not null)
-        {
-            trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Material.Source);
-            trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Material.Source);
-            TraceCommon.SectionAndLengths(trace, member);
-            trace.Add("Cc", "transition slenderness", "√(2 π² E / f)", cc, StepUnit.None, Ref);
-            AxisSteps(trace, y, jy, sy, a);
-            AxisSteps(trace, z, jz, sz, a);
-        }
+        bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
+        if (traced) TraceAxes(trace!, member, y, z, jy, jz, sy, sz);
         bool govY = sy <= sz;
         double capacity = Math.Min(sy, sz) * a;
         bool johnson = govY ? jy : jz;
         double u = actions.AxialForceN / capacity;
-        if (trace is not null)
-        {
-            trace.Add("N", "nominal capacity", "min(Ny, Nz)", capacity, StepUnit.Force, Ref);
-            ClassicalRules.Verdict(trace, actions.AxialForceN, capacity, u);
-        }
-        return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z, FailureMode.FlexuralBuckling,
-            johnson ? "Johnson parabola (λ < Cc)" : "Euler hyperbola (λ ≥ Cc)",
-            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(e, f), y.CriticalForceN, sy / f, sy * a),
-            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(e, f), z.CriticalForceN, sz / f, sz * a),
-            default, trace);
+        if (traced) TraceVerdict(trace!, actions.AxialForceN, capacity, u);
+        numbers.DesignResistanceN = capacity;
+        numbers.Utilisation = u;
+        numbers.GoverningAxis = govY ? BucklingAxis.Y : BucklingAxis.Z;
+        numbers.GoverningMode = FailureMode.FlexuralBuckling;
+        numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(e, f), y.CriticalForceN, sy / f, sy * a);
+        numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(e, f), z.CriticalForceN, sz / f, sz * a);
+        numbers.Torsional = default;
+        if (!numbers.Accepted<TEntry>(this, member)) return null;
+        return johnson ? "Johnson parabola (λ < Cc)" : "Euler hyperbola (λ ≥ Cc)";
+    }
+
+    // The steps, in methods of their own so that the untraced kernel carries none of their string building.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceAxes(CalculationTrace trace, in ResolvedMember member, in AxisData y, in AxisData z, bool jy, bool jz, double sy, double sz)
+    {
+        double e = member.ElasticModulusPa, f = member.StrengthPa;
+        trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Material.Source);
+        trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Material.Source);
+        TraceCommon.SectionAndLengths(trace, member);
+        trace.Add("Cc", "transition slenderness", "√(2 π² E / f)", TransitionSlenderness(e, f), StepUnit.None, Ref);
+        AxisSteps(trace, y, jy, sy, member.AreaM2);
+        AxisSteps(trace, z, jz, sz, member.AreaM2);
+    }
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static void TraceVerdict(CalculationTrace trace, double demandN, double capacityN, double u)
+    {
+        trace.Add("N", "nominal capacity", "min(Ny, Nz)", capacityN, StepUnit.Force, Ref);
+        ClassicalRules.Verdict(trace, demandN, capacityN, u);
     }
 
     private static void AxisSteps(CalculationTrace t, in AxisData ax, bool johnson, double sigma, double a)

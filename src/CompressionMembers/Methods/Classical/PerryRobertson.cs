@@ -67,6 +67,30 @@ public sealed class PerryRobertson : IResistanceMethod
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
     {
+        Unsafe.SkipInit(out CheckNumbers numbers);
+        string check = Numbers(member, actions, trace, ref numbers);
+        return numbers.ToResult(member, actions, this, check, trace);
+    }
+
+    /// <summary>The check's numbers (validated), traced or not; returns the governing check's words. The method's own
+    /// <see cref="Evaluate"/> and Check's traced checks take it.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
+        Kernel<MethodEntry>(member, actions, trace, ref numbers)!;
+
+    /// <summary>Check's entry for an untraced check: the numbers, compiled without the steps; null for numbers a result
+    /// refuses (Check then takes <see cref="Evaluate"/>, which throws for them).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
+        Kernel<CheckEntry>(member, actions, null, ref numbers);
+
+    private const string Governing = "Perry–Robertson: extreme fibre of the bowed strut reaches f";
+
+    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away.
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+        where TEntry : struct
+    {
         var y = new AxisData(member, BucklingAxis.Y);
         var z = new AxisData(member, BucklingAxis.Z);
         double e = member.ElasticModulusPa, f = member.StrengthPa, a = member.AreaM2;
@@ -74,16 +98,20 @@ public sealed class PerryRobertson : IResistanceMethod
         double seY = Math.PI * Math.PI * e / (y.Slenderness * y.Slenderness);
         double seZ = Math.PI * Math.PI * e / (z.Slenderness * z.Slenderness);
         double sY = CriticalStress(f, seY, etaY), sZ = CriticalStress(f, seZ, etaZ);
-        if (trace is not null) TraceAxes(trace, member, y, z, etaY, etaZ, seY, seZ, sY, sZ);
+        bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
+        if (traced) TraceAxes(trace!, member, y, z, etaY, etaZ, seY, seZ, sY, sZ);
         bool govY = sY <= sZ;
         double capacity = Math.Min(sY, sZ) * a;
         double u = actions.AxialForceN / capacity;
-        if (trace is not null) TraceVerdict(trace, actions.AxialForceN, capacity, u);
-        return new CheckResult(member, actions, this, capacity, u, govY ? BucklingAxis.Y : BucklingAxis.Z, FailureMode.FlexuralBuckling,
-            "Perry–Robertson: extreme fibre of the bowed strut reaches f",
-            new AxisOutcome(y.EffectiveLengthM, y.Slenderness, Math.Sqrt(f / seY), y.CriticalForceN, sY / f, sY * a),
-            new AxisOutcome(z.EffectiveLengthM, z.Slenderness, Math.Sqrt(f / seZ), z.CriticalForceN, sZ / f, sZ * a),
-            default, trace);
+        if (traced) TraceVerdict(trace!, actions.AxialForceN, capacity, u);
+        numbers.DesignResistanceN = capacity;
+        numbers.Utilisation = u;
+        numbers.GoverningAxis = govY ? BucklingAxis.Y : BucklingAxis.Z;
+        numbers.GoverningMode = FailureMode.FlexuralBuckling;
+        numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, Math.Sqrt(f / seY), y.CriticalForceN, sY / f, sY * a);
+        numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, Math.Sqrt(f / seZ), z.CriticalForceN, sZ / f, sZ * a);
+        numbers.Torsional = default;
+        return numbers.Accepted<TEntry>(this, member) ? Governing : null;
     }
 
     // The steps are written in separate, non-inlined methods, so that the untraced check carries none of their string
