@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using CompressionMembers.Resolution;
 using CompressionMembers.Results;
 
@@ -6,17 +7,19 @@ namespace CompressionMembers.Methods.Classical;
 /// <summary>What the classical methods share: the concentric-load rule and the closing verdict steps.</summary>
 internal static class ClassicalRules
 {
-    internal static Applicability Concentric(in ResolvedActions a, string method)
-    {
-        if (a.HasEccentricity || a.HasEndMoments)
-            return Applicability.NotApplicable(method switch
-            {
-                "Euler" => "the Euler method covers concentric compression only; use the secant method for an eccentric load.",
-                "Johnson" => "the Johnson method covers concentric compression only; use the secant method for an eccentric load.",
-                _ => "the Perry–Robertson method covers concentric compression (with an initial bow) only; use the secant method for an eccentric load.",
-            });
-        return Applicability.Applicable;
-    }
+    // The test in line (Check calls it for every untraced check of the three methods), the sentence in Refusal.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static Applicability Concentric(in ResolvedActions a, string method) =>
+        a.HasEccentricity || a.HasEndMoments ? Refusal(method) : Applicability.Applicable;
+
+    [MethodImpl(MethodImplOptions.NoInlining)]
+    private static Applicability Refusal(string method) =>
+        Applicability.NotApplicable(method switch
+        {
+            "Euler" => "the Euler method covers concentric compression only; use the secant method for an eccentric load.",
+            "Johnson" => "the Johnson method covers concentric compression only; use the secant method for an eccentric load.",
+            _ => "the Perry–Robertson method covers concentric compression (with an initial bow) only; use the secant method for an eccentric load.",
+        });
 
     internal static void Verdict(CalculationTrace t, double demandN, double capacityN, double u)
     {
