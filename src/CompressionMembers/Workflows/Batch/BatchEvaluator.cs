@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Diagnostics;
 using System.Threading;
 using System.Threading.Tasks;
 
@@ -8,8 +9,9 @@ namespace CompressionMembers.Workflows.Batch;
 /// <summary>Evaluates many independent items across cores with results in input order, so that the output is the same
 /// whatever the number of cores.</summary>
 /// <remarks>
-/// Items are handed out by <see cref="Parallel.For(int, int, ParallelOptions, Action{int})"/>; each result is written to
-/// its own slot of the output, so order never depends on scheduling. The work function must be pure (our checks are).
+/// Items are handed out in ranges by <see cref="Parallel.For(int, int, ParallelOptions, Action{int})"/> (after the first
+/// items, on the calling thread, show the batch is worth a second core); each result is written to its own slot of the
+/// output, so order never depends on scheduling. The work function must be pure (our checks are).
 /// Thread safety: stateless.
 /// </remarks>
 public static class BatchEvaluator
@@ -43,7 +45,8 @@ public static class BatchEvaluator
     /// <param name="options">Cores, progress and cancellation; <see cref="BatchOptions.Default"/> if null.</param>
     /// <remarks>The items are handed out in contiguous ranges (about 64), so that the cores do not contend for
     /// each item and neighbouring results are written by the same core; each result is written to its own slot, so the
-    /// output never depends on scheduling.</remarks>
+    /// output never depends on scheduling. A batch that takes less than about a quarter of a millisecond runs on the
+    /// calling thread alone (waking a second core would cost more); a larger one is spread after its first items.</remarks>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="ArgumentException"><paramref name="results"/> is shorter than <paramref name="items"/>.</exception>
     /// <exception cref="OperationCanceledException">The batch was cancelled.</exception>
@@ -71,16 +74,41 @@ public static class BatchEvaluator
             }
             return;
         }
-        // About 64 ranges (of at least 64 items): few enough hand-outs to cost nothing, enough to even out cores that
-        // finish early on machines of up to a few dozen cores. The split does not depend on the machine, and no result
-        // depends on it.
-        int chunk = Math.Max(64, (n + 63) / 64);
-        int ranges = (n + chunk - 1) / chunk;
-        int done = 0;
+        // The first items run here, in order, sixteen at a time, while the batch looks small: handing work to a second
+        // core costs waking it (0.1-0.5 ms measured on a two-core virtual machine, docs/performance.md), more than a batch
+        // of a thousand checks takes. As soon as the time so far, or the time projected from it for the whole batch,
+        // reaches SmallBatchTicks, the rest is handed out across the cores; the projection is trusted only after a
+        // quarter of that (a stall of a few tens of microseconds early on, which this machine has, would make a small
+        // batch look large). So a small batch never pays for a second core, a large one starts it after some 60 µs, and a batch whose first
+        // items happen to be cheap loses at most about SmallBatchTicks. Which items ran here never changes a result.
+        int k = 0;
+        long start = Stopwatch.GetTimestamp();
+        try
+        {
+            while (k < n)
+            {
+                token.ThrowIfCancellationRequested();
+                for (int to = Math.Min(n, k + 16); k < to; k++) results[k] = evaluate(items[k], k);
+                long elapsed = Stopwatch.GetTimestamp() - start;
+                if (elapsed >= SmallBatchTicks || (elapsed >= SmallBatchTicks / 4 && elapsed * (double)n / k >= SmallBatchTicks)) break;
+            }
+        }
+        catch (Exception ex) when (ex is not OperationCanceledException oce || oce.CancellationToken != token)
+        {
+            throw new AggregateException(ex);   // as Parallel.For reports the work's exceptions
+        }
+        if (progress is not null && k > 0) progress.Report(new BatchProgress(k, n));
+        if (k == n) return;
+        // The rest in about 64 ranges (of at least 64 items): few enough hand-outs to cost nothing, enough to even out
+        // cores that finish early on machines of up to a few dozen cores. No result depends on the split.
+        int first = k, rest = n - k;
+        int chunk = Math.Max(64, (rest + 63) / 64);
+        int ranges = (rest + chunk - 1) / chunk;
+        int done = k;
         var po = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism, CancellationToken = token };
         Parallel.For(0, ranges, po, r =>
         {
-            int from = r * chunk, to = Math.Min(n, from + chunk);
+            int from = first + r * chunk, to = Math.Min(n, from + chunk);
             for (int i = from; i < to; i++) results[i] = evaluate(items[i], i);
             if (progress is not null)
             {
@@ -89,4 +117,7 @@ public static class BatchEvaluator
             }
         });
     }
+
+    /// <summary>A quarter of a millisecond: below this a batch is not worth a second core (see RunInto).</summary>
+    private static readonly long SmallBatchTicks = Stopwatch.Frequency / 4000;
 }
