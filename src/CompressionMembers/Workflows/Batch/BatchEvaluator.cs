@@ -74,18 +74,21 @@ public static class BatchEvaluator
             }
             return;
         }
-        // The first items run here, in order, sixteen at a time, while the batch looks small: handing work to a second
-        // core costs waking it (0.1-0.5 ms measured on a two-core virtual machine, docs/performance.md), more than a batch
-        // of a thousand checks takes. As soon as the time so far, or the time projected from it for the whole batch,
-        // reaches SmallBatchTicks, the rest is handed out across the cores; the projection is trusted only after a
-        // quarter of that (a stall of a few tens of microseconds early on, which this machine has, would make a small
-        // batch look large). So a small batch never pays for a second core, a large one starts it after some 60 µs, and a batch whose first
-        // items happen to be cheap loses at most about SmallBatchTicks. Which items ran here never changes a result.
+        // A batch of fewer than 16,384 items runs its first items here, in order, sixteen at a time, while it looks small:
+        // handing work to a second core costs waking it (0.1-0.5 ms measured on a two-core virtual machine,
+        // docs/performance.md), more than a batch of a thousand checks takes. As soon as the time so far, or the time
+        // projected from it for the whole batch, reaches SmallBatchTicks, the rest is handed out across the cores; the
+        // projection is trusted only after a quarter of that (a stall of a few tens of microseconds early on, which this
+        // machine has, would make a small batch look large). So a small batch never pays for a second core, a larger one
+        // starts it after some 60 µs, and a batch whose first items happen to be cheap loses at most about SmallBatchTicks.
+        // A batch of 16,384 items or more goes to the cores at once: even at 20 ns an item (a short check) it takes longer
+        // than that, and a pool thread still spinning after the previous batch of a sweep is caught awake. Which items ran
+        // here never changes a result.
         int k = 0;
         long start = Stopwatch.GetTimestamp();
         try
         {
-            while (k < n)
+            while (k < n && n < 16_384)
             {
                 token.ThrowIfCancellationRequested();
                 for (int to = Math.Min(n, k + 16); k < to; k++) results[k] = evaluate(items[k], k);
