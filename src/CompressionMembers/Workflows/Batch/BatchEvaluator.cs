@@ -85,20 +85,23 @@ public static class BatchEvaluator
         // than that, and a pool thread still spinning after the previous batch of a sweep is caught awake. Which items ran
         // here never changes a result.
         int k = 0;
-        long start = Stopwatch.GetTimestamp();
-        try
+        if (n < 16_384)
         {
-            while (k < n && n < 16_384)
+            long start = Stopwatch.GetTimestamp();
+            try
             {
-                token.ThrowIfCancellationRequested();
-                for (int to = Math.Min(n, k + 16); k < to; k++) results[k] = evaluate(items[k], k);
-                long elapsed = Stopwatch.GetTimestamp() - start;
-                if (elapsed >= SmallBatchTicks || (elapsed >= SmallBatchTicks / 4 && elapsed * (double)n / k >= SmallBatchTicks)) break;
+                while (k < n)
+                {
+                    token.ThrowIfCancellationRequested();
+                    for (int to = Math.Min(n, k + 16); k < to; k++) results[k] = evaluate(items[k], k);
+                    long elapsed = Stopwatch.GetTimestamp() - start;
+                    if (elapsed >= SmallBatchTicks || (elapsed >= SmallBatchTicks / 4 && elapsed * (double)n / k >= SmallBatchTicks)) break;
+                }
             }
-        }
-        catch (Exception ex) when (ex is not OperationCanceledException oce || oce.CancellationToken != token)
-        {
-            throw new AggregateException(ex);   // as Parallel.For reports the work's exceptions
+            catch (Exception ex) when (ex is not OperationCanceledException oce || oce.CancellationToken != token)
+            {
+                throw new AggregateException(ex);   // as Parallel.For reports the work's exceptions
+            }
         }
         if (progress is not null && k > 0) progress.Report(new BatchProgress(k, n));
         if (k == n) return;
