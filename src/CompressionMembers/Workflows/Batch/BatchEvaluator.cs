@@ -25,7 +25,9 @@ public static class BatchEvaluator
     /// <returns>The results, in the order of the items.</returns>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="OperationCanceledException">The batch was cancelled.</exception>
-    /// <exception cref="AggregateException">The work threw for some item (the first exceptions, as Parallel.For gathers them).</exception>
+    /// <exception cref="AggregateException">The work threw for some item (the first exceptions, as Parallel.For gathers them),
+    /// whichever thread ran it. With a <see cref="BatchOptions.MaxDegreeOfParallelism"/> of 1 (<see cref="BatchOptions.Serial"/>)
+    /// the work's exception arrives as it was thrown, unwrapped.</exception>
     public static IReadOnlyList<TOut> Run<TIn, TOut>(IReadOnlyList<TIn> items, Func<TIn, int, TOut> evaluate, BatchOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(items);
@@ -50,7 +52,9 @@ public static class BatchEvaluator
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
     /// <exception cref="ArgumentException"><paramref name="results"/> is shorter than <paramref name="items"/>.</exception>
     /// <exception cref="OperationCanceledException">The batch was cancelled.</exception>
-    /// <exception cref="AggregateException">The work threw for some item (the first exceptions, as Parallel.For gathers them).</exception>
+    /// <exception cref="AggregateException">The work threw for some item (the first exceptions, as Parallel.For gathers them),
+    /// whichever thread ran it. With a <see cref="BatchOptions.MaxDegreeOfParallelism"/> of 1 (<see cref="BatchOptions.Serial"/>)
+    /// the work's exception arrives as it was thrown, unwrapped.</exception>
     public static void RunInto<TIn, TOut>(IReadOnlyList<TIn> items, Func<TIn, int, TOut> evaluate, TOut[] results, BatchOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(items);
