@@ -49,27 +49,30 @@ public sealed class EulerBuckling : IResistanceMethod
     internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
         Kernel<CheckEntry>(member, actions, null, ref numbers);
 
-    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away.
+    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away. The
+    // member's values are read as scalars, not through AxisData: the JIT kept those two eight-field structs in memory
+    // (sixteen stack stores a check, docs/performance.md, ninth round); the steps build them in their own method.
     [MethodImpl(MethodImplOptions.NoInlining)]
     private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
         where TEntry : struct
     {
-        var y = new AxisData(member, BucklingAxis.Y);
-        var z = new AxisData(member, BucklingAxis.Z);
+        double ncrY = member.CriticalForceYN, ncrZ = member.CriticalForceZN;
         double squash = member.AreaM2 * member.StrengthPa;
         bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
-        if (traced) TraceAxes(trace!, member, y, z, squash);
-        var gov = y.CriticalForceN <= z.CriticalForceN ? y : z;
-        double capacity = Math.Min(gov.CriticalForceN, squash);
-        bool yields = squash < gov.CriticalForceN;
+        if (traced) TraceAxes(trace!, member, squash);
+        bool govY = ncrY <= ncrZ;
+        double ncr = govY ? ncrY : ncrZ;
+        double capacity = Math.Min(ncr, squash);
+        bool yields = squash < ncr;
         double u = actions.AxialForceN / capacity;
         if (traced) TraceVerdict(trace!, actions.AxialForceN, capacity, u, yields);
+        double lambda1 = AxisData.Lambda1(member.ElasticModulusPa, member.StrengthPa);
         numbers.DesignResistanceN = capacity;
         numbers.Utilisation = u;
-        numbers.GoverningAxis = yields ? BucklingAxis.None : gov.Axis;
+        numbers.GoverningAxis = yields ? BucklingAxis.None : govY ? BucklingAxis.Y : BucklingAxis.Z;
         numbers.GoverningMode = yields ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
-        numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), y.CriticalForceN, double.NaN, Math.Min(y.CriticalForceN, squash));
-        numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(member.ElasticModulusPa, member.StrengthPa), z.CriticalForceN, double.NaN, Math.Min(z.CriticalForceN, squash));
+        numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, member.SlendernessY, member.SlendernessY / lambda1, ncrY, double.NaN, Math.Min(ncrY, squash));
+        numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, member.SlendernessZ, member.SlendernessZ / lambda1, ncrZ, double.NaN, Math.Min(ncrZ, squash));
         numbers.Torsional = default;
         if (!numbers.Accepted<TEntry>(this, member)) return null;
         return yields ? "squash load A·f (below the Euler load)" : "Euler critical load";
@@ -77,8 +80,10 @@ public sealed class EulerBuckling : IResistanceMethod
 
     // The steps, in methods of their own so that the untraced kernel carries none of their string building.
     [MethodImpl(MethodImplOptions.NoInlining)]
-    private static void TraceAxes(CalculationTrace trace, in ResolvedMember member, in AxisData y, in AxisData z, double squash)
+    private static void TraceAxes(CalculationTrace trace, in ResolvedMember member, double squash)
     {
+        var y = new AxisData(member, BucklingAxis.Y);
+        var z = new AxisData(member, BucklingAxis.Z);
         trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Material.Source);
         trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Material.Source);
         TraceCommon.SectionAndLengths(trace, member);

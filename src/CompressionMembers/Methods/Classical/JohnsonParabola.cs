@@ -64,18 +64,18 @@ public sealed class JohnsonParabola : IResistanceMethod
     internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
         Kernel<CheckEntry>(member, actions, null, ref numbers);
 
-    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away.
+    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away. The
+    // member's values are read as scalars, not through AxisData, which the JIT kept in memory (as in EulerBuckling).
     [MethodImpl(MethodImplOptions.NoInlining)]
     private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
         where TEntry : struct
     {
-        var y = new AxisData(member, BucklingAxis.Y);
-        var z = new AxisData(member, BucklingAxis.Z);
         double e = member.ElasticModulusPa, f = member.StrengthPa, a = member.AreaM2;
-        double sy = CriticalStress(y.Slenderness, e, f, out bool jy);
-        double sz = CriticalStress(z.Slenderness, e, f, out bool jz);
+        double lamY = member.SlendernessY, lamZ = member.SlendernessZ;
+        double sy = CriticalStress(lamY, e, f, out bool jy);
+        double sz = CriticalStress(lamZ, e, f, out bool jz);
         bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
-        if (traced) TraceAxes(trace!, member, y, z, jy, jz, sy, sz);
+        if (traced) TraceAxes(trace!, member, jy, jz, sy, sz);
         bool govY = sy <= sz;
         double capacity = Math.Min(sy, sz) * a;
         bool johnson = govY ? jy : jz;
@@ -85,8 +85,9 @@ public sealed class JohnsonParabola : IResistanceMethod
         numbers.Utilisation = u;
         numbers.GoverningAxis = govY ? BucklingAxis.Y : BucklingAxis.Z;
         numbers.GoverningMode = FailureMode.FlexuralBuckling;
-        numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, y.RelativeSlenderness(e, f), y.CriticalForceN, sy / f, sy * a);
-        numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, z.RelativeSlenderness(e, f), z.CriticalForceN, sz / f, sz * a);
+        double lambda1 = AxisData.Lambda1(e, f);
+        numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, lamY, lamY / lambda1, member.CriticalForceYN, sy / f, sy * a);
+        numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, lamZ, lamZ / lambda1, member.CriticalForceZN, sz / f, sz * a);
         numbers.Torsional = default;
         if (!numbers.Accepted<TEntry>(this, member)) return null;
         return johnson ? "Johnson parabola (λ < Cc)" : "Euler hyperbola (λ ≥ Cc)";
@@ -94,8 +95,10 @@ public sealed class JohnsonParabola : IResistanceMethod
 
     // The steps, in methods of their own so that the untraced kernel carries none of their string building.
     [MethodImpl(MethodImplOptions.NoInlining)]
-    private static void TraceAxes(CalculationTrace trace, in ResolvedMember member, in AxisData y, in AxisData z, bool jy, bool jz, double sy, double sz)
+    private static void TraceAxes(CalculationTrace trace, in ResolvedMember member, bool jy, bool jz, double sy, double sz)
     {
+        var y = new AxisData(member, BucklingAxis.Y);
+        var z = new AxisData(member, BucklingAxis.Z);
         double e = member.ElasticModulusPa, f = member.StrengthPa;
         trace.Add("E", "elastic modulus", TraceCommon.Input, e, StepUnit.Stress, member.Material.Source);
         trace.Add("f", "compressive strength (yield)", TraceCommon.Input, f, StepUnit.Stress, member.Material.Source);

@@ -56,13 +56,20 @@ public sealed class PerryRobertson : IResistanceMethod
         return fPa / (q + Math.Sqrt(Math.Max(disc, 0)));
     }
 
-    private double Eta(in AxisData ax, in ResolvedActions actions) => Imperfection.Kind switch
+    // η about one axis from the member's scalars for that axis (the kernel reads them without AxisData, see Kernel). The
+    // extreme fibre of a buckle about y lies along z, and the other way round (as AxisData takes it).
+    private double Eta(in ResolvedMember m, in ResolvedActions actions, bool aboutY) => Imperfection.Kind switch
     {
         PerryImperfection.Model.Constant => Imperfection.Value,
-        PerryImperfection.Model.Robertson => Imperfection.Value * ax.Slenderness,
-        PerryImperfection.Model.BowRatio => ax.EffectiveLengthM / Imperfection.Value * ax.FibreMaxM / (ax.RadiusM * ax.RadiusM),
-        _ => (ax.Axis == BucklingAxis.Y ? actions.InitialBowYM : actions.InitialBowZM) * ax.FibreMaxM / (ax.RadiusM * ax.RadiusM),
+        PerryImperfection.Model.Robertson => Imperfection.Value * (aboutY ? m.SlendernessY : m.SlendernessZ),
+        PerryImperfection.Model.BowRatio => (aboutY ? m.EffectiveLengthYM : m.EffectiveLengthZM) / Imperfection.Value * FibreMax(m, aboutY) / Radius2(m, aboutY),
+        _ => (aboutY ? actions.InitialBowYM : actions.InitialBowZM) * FibreMax(m, aboutY) / Radius2(m, aboutY),
     };
+
+    private static double FibreMax(in ResolvedMember m, bool aboutY) =>
+        aboutY ? Math.Max(m.FibrePositiveZM, m.FibreNegativeZM) : Math.Max(m.FibrePositiveYM, m.FibreNegativeYM);
+
+    private static double Radius2(in ResolvedMember m, bool aboutY) => aboutY ? m.RadiusYM * m.RadiusYM : m.RadiusZM * m.RadiusZM;
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
@@ -86,20 +93,21 @@ public sealed class PerryRobertson : IResistanceMethod
 
     private const string Governing = "Perry–Robertson: extreme fibre of the bowed strut reaches f";
 
-    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away.
+    // One source compiled twice (KernelEntry): for Check's untraced entry the step writers and the throw fold away. The
+    // member's values are read as scalars, not through AxisData, which the JIT kept in memory (as in EulerBuckling).
     [MethodImpl(MethodImplOptions.NoInlining)]
     private string? Kernel<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
         where TEntry : struct
     {
-        var y = new AxisData(member, BucklingAxis.Y);
-        var z = new AxisData(member, BucklingAxis.Z);
+        // η first: Eta is a call, and values loaded before it would be saved to the stack around it.
+        double etaY = Eta(member, actions, true), etaZ = Eta(member, actions, false);
         double e = member.ElasticModulusPa, f = member.StrengthPa, a = member.AreaM2;
-        double etaY = Eta(y, actions), etaZ = Eta(z, actions);
-        double seY = Math.PI * Math.PI * e / (y.Slenderness * y.Slenderness);
-        double seZ = Math.PI * Math.PI * e / (z.Slenderness * z.Slenderness);
+        double lamY = member.SlendernessY, lamZ = member.SlendernessZ;
+        double seY = Math.PI * Math.PI * e / (lamY * lamY);
+        double seZ = Math.PI * Math.PI * e / (lamZ * lamZ);
         double sY = CriticalStress(f, seY, etaY), sZ = CriticalStress(f, seZ, etaZ);
         bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
-        if (traced) TraceAxes(trace!, member, y, z, etaY, etaZ, seY, seZ, sY, sZ);
+        if (traced) TraceAxes(trace!, member, etaY, etaZ, seY, seZ, sY, sZ);
         bool govY = sY <= sZ;
         double capacity = Math.Min(sY, sZ) * a;
         double u = actions.AxialForceN / capacity;
@@ -108,8 +116,8 @@ public sealed class PerryRobertson : IResistanceMethod
         numbers.Utilisation = u;
         numbers.GoverningAxis = govY ? BucklingAxis.Y : BucklingAxis.Z;
         numbers.GoverningMode = FailureMode.FlexuralBuckling;
-        numbers.AboutY = new AxisOutcome(y.EffectiveLengthM, y.Slenderness, Math.Sqrt(f / seY), y.CriticalForceN, sY / f, sY * a);
-        numbers.AboutZ = new AxisOutcome(z.EffectiveLengthM, z.Slenderness, Math.Sqrt(f / seZ), z.CriticalForceN, sZ / f, sZ * a);
+        numbers.AboutY = new AxisOutcome(member.EffectiveLengthYM, lamY, Math.Sqrt(f / seY), member.CriticalForceYN, sY / f, sY * a);
+        numbers.AboutZ = new AxisOutcome(member.EffectiveLengthZM, lamZ, Math.Sqrt(f / seZ), member.CriticalForceZN, sZ / f, sZ * a);
         numbers.Torsional = default;
         return numbers.Accepted<TEntry>(this, member) ? Governing : null;
     }
@@ -117,9 +125,11 @@ public sealed class PerryRobertson : IResistanceMethod
     // The steps are written in separate, non-inlined methods, so that the untraced check carries none of their string
     // building (Performance/ColdPathTests).
     [MethodImpl(MethodImplOptions.NoInlining)]
-    private void TraceAxes(CalculationTrace trace, in ResolvedMember member, in AxisData y, in AxisData z,
+    private void TraceAxes(CalculationTrace trace, in ResolvedMember member,
         double etaY, double etaZ, double seY, double seZ, double sY, double sZ)
     {
+        var y = new AxisData(member, BucklingAxis.Y);
+        var z = new AxisData(member, BucklingAxis.Z);
         trace.Add("E", "elastic modulus", TraceCommon.Input, member.ElasticModulusPa, StepUnit.Stress, member.Material.Source);
         trace.Add("f", "compressive strength (yield)", TraceCommon.Input, member.StrengthPa, StepUnit.Stress, member.Material.Source);
         TraceCommon.SectionAndLengths(trace, member);

@@ -32,6 +32,10 @@ internal readonly struct AxisData
     internal double FibreMaxM => Math.Max(FibrePositiveM, FibreNegativeM);
 
     /// <summary>Relative slenderness λ̄ = λ / λ1 with λ1 = π √(E / f), i.e. √(A f / Ncr).</summary>
-    internal double RelativeSlenderness(double ePa, double fPa) => Slenderness / (Math.PI * Math.Sqrt(ePa / fPa));
+    internal double RelativeSlenderness(double ePa, double fPa) => Slenderness / Lambda1(ePa, fPa);
+
+    /// <summary>λ1 = π √(E / f), the slenderness at which the Euler stress equals f (the divisor of
+    /// <see cref="RelativeSlenderness"/>; kernels that read the member's scalars divide by it themselves).</summary>
+    internal static double Lambda1(double ePa, double fPa) => Math.PI * Math.Sqrt(ePa / fPa);
     internal string Sub => Axis == BucklingAxis.Y ? "y" : "z";
 }
