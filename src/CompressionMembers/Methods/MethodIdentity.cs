@@ -26,7 +26,18 @@ public sealed class MethodIdentity
         Edition = edition ?? "";
         Clause = clause ?? "";
         _settings = settings is null ? [] : (MethodSetting[])settings.Clone();
+        _canonicalSettings = _settings;
     }
+
+    /// <summary>An identity whose canonical form (the input fingerprint) is written from
+    /// <paramref name="fingerprintSettings"/> instead of the settings a report shows: for a method whose settings' wording
+    /// changed after a release, the released lines keep the fingerprints of earlier reports valid
+    /// (docs/reproducibility.md).</summary>
+    internal MethodIdentity(string name, string standard, string edition, string clause, MethodSetting[] fingerprintSettings, params MethodSetting[] settings)
+        : this(name, standard, edition, clause, settings) =>
+        _canonicalSettings = (MethodSetting[])fingerprintSettings.Clone();
+
+    private readonly MethodSetting[] _canonicalSettings;
 
     /// <summary>Method name.</summary>
     public string Name { get; }
@@ -52,6 +63,6 @@ public sealed class MethodIdentity
     internal void AddCanonical(CanonicalForm form)
     {
         form.Add("method.name", Name).Add("method.standard", Standard).Add("method.edition", Edition).Add("method.clause", Clause);
-        foreach (var s in _settings) form.Add("method.setting." + s.Symbol, s.Value).Add("method.setting." + s.Symbol + ".note", s.Note);
+        foreach (var s in _canonicalSettings) form.Add("method.setting." + s.Symbol, s.Value).Add("method.setting." + s.Symbol + ".note", s.Note);
     }
 }

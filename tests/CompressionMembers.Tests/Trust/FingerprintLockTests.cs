@@ -5,6 +5,7 @@ using CompressionMembers.Materials.Aluminium;
 using CompressionMembers.Materials.Timber;
 using CompressionMembers.Members;
 using CompressionMembers.Methods;
+using CompressionMembers.Methods.Classical;
 using CompressionMembers.Reporting;
 using CompressionMembers.Restraints;
 using CompressionMembers.Sections;
@@ -40,6 +41,18 @@ public class FingerprintLockTests(ITestOutputHelper output)
         // 6061-T6: relocked when its thickness band was corrected to t ≤ 20 mm (EN 1999-1-1 Table 3.2b) and its source text
         // changed; f0, fu and the HAZ factors did not change.
         yield return ["aluminium buckling constants", Pinned(new RectangularHollowSection(Mm(100), Mm(100), Mm(4)), AluminiumAlloys.EnAw6061T6Extrusion), ResistanceMethods.AluminiumBucklingConstantsAsd, "c1-a39933f44198c339"];
+        // Method settings whose report wording changed after 0.1.0 (Perry–Robertson's imperfection under its own symbol, the
+        // tangent modulus's n shown as "—" when each material gives it): locked at the values the 0.1.0 code computed, so
+        // that earlier reports keep their fingerprints.
+        var tube = new RectangularHollowSection(Mm(100), Mm(100), Mm(4));
+        var alu = AluminiumAlloys.EnAw6082T6Extrusion;
+        yield return ["Perry–Robertson, Robertson default", Pinned(tube, steel), ResistanceMethods.PerryRobertsonDefault, "c1-64b42fc3e0e27b6a"];
+        yield return ["Perry–Robertson, Robertson a = 0.005", Pinned(tube, steel), ResistanceMethods.PerryRobertson(PerryImperfection.Robertson(0.005)), "c1-1014f11a2a4d6689"];
+        yield return ["Perry–Robertson, η = 0.2", Pinned(tube, steel), ResistanceMethods.PerryRobertson(PerryImperfection.Constant(0.2)), "c1-c02238c64f9a70d5"];
+        yield return ["Perry–Robertson, bow L/1000", Pinned(tube, steel), ResistanceMethods.PerryRobertson(PerryImperfection.FromBowRatio(1000)), "c1-f2cce3948d4f29c0"];
+        yield return ["Perry–Robertson, bow from the actions", Pinned(tube, steel), ResistanceMethods.PerryRobertson(PerryImperfection.FromActions), "c1-42c2d27701bf1eae"];
+        yield return ["tangent modulus, n from the material", Pinned(tube, alu), ResistanceMethods.TangentModulusRambergOsgood, "c1-ccc0d900143a12e0"];
+        yield return ["tangent modulus, n = 20", Pinned(tube, alu), CompressionMembers.Methods.Aluminium.TangentModulusColumn.WithExponent(20), "c1-8f2b6c926ae7f5e9"];
         // Section kinds, all in the same steel under Euler.
         yield return ["rectangle", Pinned(new RectangleSection(Mm(60), Mm(90)), steel), ResistanceMethods.Euler, "c1-577d75ff798c8ace"];
         yield return ["circle", Pinned(new CircleSection(Mm(60)), steel), ResistanceMethods.Euler, "c1-ed8479cbf0f34d45"];

@@ -17,6 +17,9 @@ public sealed class PerryImperfection
         Description = description;
     }
 
+    /// <summary>The default of <see cref="Robertson"/>: a = 0.003, adopted for steel struts in BS 449 (from memory).</summary>
+    internal const double RobertsonDefault = 0.003;
+
     internal Model Kind { get; }
     internal double Value { get; }
 
@@ -38,7 +41,7 @@ public sealed class PerryImperfection
     /// <param name="a">The constant a ≥ 0.</param>
     /// <returns>The model.</returns>
     /// <exception cref="ArgumentOutOfRangeException">a is not finite or is negative.</exception>
-    public static PerryImperfection Robertson(double a = 0.003)
+    public static PerryImperfection Robertson(double a = RobertsonDefault)
     {
         Guard.NonNegative(a, nameof(a), "", "Robertson constant a");
         return new PerryImperfection(Model.Robertson, a, $"η = {Guard.Show(a)} λ (Robertson)");

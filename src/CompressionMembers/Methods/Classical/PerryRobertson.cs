@@ -29,12 +29,26 @@ public sealed class PerryRobertson : IResistanceMethod
     public PerryRobertson(PerryImperfection imperfection)
     {
         Imperfection = Guard.NotNull(imperfection, nameof(imperfection));
+        // The fingerprint keeps 0.1.0's line for the setting (η = the model's value, noted with the model's name), so that a
+        // report made with 0.1.0 keeps its fingerprint; reports show the setting under its own symbol (Setting).
+        var released = new MethodSetting("η", "imperfection model: " + imperfection.Description, imperfection.Value, StepUnit.None, false, imperfection.Kind.ToString());
         Identity = new MethodIdentity("Perry–Robertson formula", "Perry–Robertson (Timoshenko & Gere; Trahair & Bradford)", "", "initially curved struts",
-            new MethodSetting("η", "imperfection model: " + imperfection.Description, imperfection.Value, StepUnit.None, false, imperfection.Kind.ToString()));
+            [released], Setting(imperfection));
     }
 
     /// <summary>The imperfection model.</summary>
     public PerryImperfection Imperfection { get; }
+
+    // The setting under its own symbol: η only where η itself is given; the Robertson constant a, the bow ratio Lcr / e0,
+    // or e0 from the actions (no single value: "—") otherwise.
+    private static MethodSetting Setting(PerryImperfection m) => m.Kind switch
+    {
+        PerryImperfection.Model.Constant => new("η", "imperfection parameter, the same about both axes", m.Value, StepUnit.None, false, ""),
+        PerryImperfection.Model.Robertson => new("a", "Robertson's constant: η = a λ about each axis", m.Value, StepUnit.None, m.Value == PerryImperfection.RobertsonDefault,
+            m.Value == PerryImperfection.RobertsonDefault ? "the constant adopted for steel struts in BS 449 (from memory)" : ""),
+        PerryImperfection.Model.BowRatio => new("Lcr / e0", "initial bow e0 = Lcr / ratio about each axis; η = e0 c / i²", m.Value, StepUnit.None, false, ""),
+        _ => new("e0", "initial bow about each axis from the design actions (straight where none is given); η = e0 c / i²", double.NaN, StepUnit.None, false, ""),
+    };
 
     /// <inheritdoc/>
     public MethodIdentity Identity { get; }

@@ -100,6 +100,23 @@ public class PerryRobertsonTests
     }
 
     [Fact]
+    public void Identity_Setting_IsTheModelsOwnQuantity()
+    {
+        // A report must not show a bow ratio or Robertson's constant as η (0.1.0 printed "η : 1000" for a bow of L/1000,
+        // and "η : 0" for bows from the actions, which reads as a perfect column).
+        static MethodSetting Only(PerryImperfection m) => Assert.Single(ResistanceMethods.PerryRobertson(m).Identity.Settings);
+        var constant = Only(PerryImperfection.Constant(0.2));
+        Assert.Equal(("η", 0.2), (constant.Symbol, constant.Value));
+        var robertson = Only(PerryImperfection.Robertson());
+        Assert.Equal(("a", 0.003, true), (robertson.Symbol, robertson.Value, robertson.IsRecommendedValue));
+        var ratio = Only(PerryImperfection.FromBowRatio(1000));
+        Assert.Equal(("Lcr / e0", 1000.0), (ratio.Symbol, ratio.Value));
+        var actions = Only(PerryImperfection.FromActions);
+        Assert.Equal("e0", actions.Symbol);
+        Assert.True(double.IsNaN(actions.Value));   // no single value: reports show "—"
+    }
+
+    [Fact]
     public void Constant_NegativeEta_Throws()
     {
         var ex = Assert.Throws<ArgumentOutOfRangeException>(() => PerryImperfection.Constant(-0.1));
