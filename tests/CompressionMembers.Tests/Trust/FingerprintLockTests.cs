@@ -42,7 +42,7 @@ public class FingerprintLockTests(ITestOutputHelper output)
         // changed; f0, fu and the HAZ factors did not change.
         yield return ["aluminium buckling constants", Pinned(new RectangularHollowSection(Mm(100), Mm(100), Mm(4)), AluminiumAlloys.EnAw6061T6Extrusion), ResistanceMethods.AluminiumBucklingConstantsAsd, "c1-a39933f44198c339"];
         // Method settings whose report wording changed after 0.1.0 (Perry–Robertson's imperfection under its own symbol, the
-        // tangent modulus's n shown as "—" when each material gives it): locked at the values the 0.1.0 code computed, so
+        // tangent modulus's n shown as "—" when each material gives it, EN 1999-1-1's weld area as Ahaz): locked at the values the 0.1.0 code computed, so
         // that earlier reports keep their fingerprints.
         var tube = new RectangularHollowSection(Mm(100), Mm(100), Mm(4));
         var alu = AluminiumAlloys.EnAw6082T6Extrusion;
@@ -53,6 +53,9 @@ public class FingerprintLockTests(ITestOutputHelper output)
         yield return ["Perry–Robertson, bow from the actions", Pinned(tube, steel), ResistanceMethods.PerryRobertson(PerryImperfection.FromActions), "c1-42c2d27701bf1eae"];
         yield return ["tangent modulus, n from the material", Pinned(tube, alu), ResistanceMethods.TangentModulusRambergOsgood, "c1-ccc0d900143a12e0"];
         yield return ["tangent modulus, n = 20", Pinned(tube, alu), CompressionMembers.Methods.Aluminium.TangentModulusColumn.WithExponent(20), "c1-8f2b6c926ae7f5e9"];
+        // EN 1999-1-1 with welds: the heat-affected area shown as Ahaz after 0.1.0 (0.1.0 printed "weld : 0 mm²").
+        yield return ["EN 1999-1-1, welds at the ends", Pinned(tube, alu), ResistanceMethods.Eurocode9With(CompressionMembers.Methods.Aluminium.AluminiumWelding.AtEnds(WeldingProcess.Mig)), "c1-b6e75df852cf8158"];
+        yield return ["EN 1999-1-1, longitudinal welds", Pinned(tube, alu), ResistanceMethods.Eurocode9With(CompressionMembers.Methods.Aluminium.AluminiumWelding.Longitudinal(WeldingProcess.Tig, Area.FromSquareMillimeters(300))), "c1-11bfc5ba828b8c74"];
         // Section kinds, all in the same steel under Euler.
         yield return ["rectangle", Pinned(new RectangleSection(Mm(60), Mm(90)), steel), ResistanceMethods.Euler, "c1-577d75ff798c8ace"];
         yield return ["circle", Pinned(new CircleSection(Mm(60)), steel), ResistanceMethods.Euler, "c1-ed8479cbf0f34d45"];

@@ -85,11 +85,18 @@ public sealed class Eurocode9Compression : IResistanceMethod
         var m2 = new MethodSetting("γM2", "partial factor for the net section at welds", partialFactorM2, StepUnit.None,
                 partialFactorM2 == RecommendedPartialFactorM2, "recommended value of EN 1999-1-1 6.1.3; a national annex may change it");
         const string name = "EN 1999-1-1 aluminium member in compression", clause = "6.1.4–6.1.6, 6.2.4, 6.3.1, 6.3.3";
-        Identity = Welding.IsWelded
-            ? new MethodIdentity(name, Std, "2007+A1:2009", clause, m1, m2,
-                new MethodSetting("weld", "welding of the member (" + Welding.Description + ")", Welding.HeatAffectedAreaM2, StepUnit.Area, false,
-                    "member-specific; Ahaz of longitudinal welds (0 for welds at the ends only)"))
-            : new MethodIdentity(name, Std, "2007+A1:2009", clause, m1, m2);
+        if (!Welding.IsWelded)
+        {
+            Identity = new MethodIdentity(name, Std, "2007+A1:2009", clause, m1, m2);
+            return;
+        }
+        // Reports show the area under its own symbol (0.1.0 printed "weld : 0 mm²" for welds at the ends, which reads as
+        // "no weld"); the fingerprint keeps 0.1.0's line, so that earlier reports keep their fingerprints.
+        var released = new MethodSetting("weld", "welding of the member (" + Welding.Description + ")", Welding.HeatAffectedAreaM2, StepUnit.Area, false,
+            "member-specific; Ahaz of longitudinal welds (0 for welds at the ends only)");
+        var shown = new MethodSetting("Ahaz", "heat-affected area of longitudinal welds (0: none, the welds are at the ends); welding: " + Welding.Description,
+            Welding.HeatAffectedAreaM2, StepUnit.Area, false, "member-specific");
+        Identity = new MethodIdentity(name, Std, "2007+A1:2009", clause, [m1, m2, released], m1, m2, shown);
     }
 
     /// <summary>How the member is welded.</summary>
