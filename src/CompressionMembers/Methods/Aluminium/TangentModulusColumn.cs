@@ -35,10 +35,11 @@ public sealed class TangentModulusColumn : IResistanceMethod
         ExponentBasis = basis;
         // Reports show n as "—" when each member's material gives it; the fingerprint keeps 0.1.0's line (0 for that case),
         // so that a report made with 0.1.0 keeps its fingerprint.
-        var released = new MethodSetting("n", "Ramberg–Osgood exponent", double.IsNaN(exponent) ? 0 : exponent, StepUnit.None, double.IsNaN(exponent), basis);
+        bool perMaterial = double.IsNaN(exponent);
+        var released = new MethodSetting("n", "Ramberg–Osgood exponent", perMaterial ? 0 : exponent, StepUnit.None, perMaterial, basis);
         Identity = new MethodIdentity("Tangent-modulus column (Ramberg–Osgood)", "Engesser tangent-modulus theory; EN 1999-1-1 Annex E material law", "", "",
-            [released], new MethodSetting("n", double.IsNaN(exponent) ? "Ramberg–Osgood exponent, from each member's material" : "Ramberg–Osgood exponent",
-                exponent, StepUnit.None, double.IsNaN(exponent), basis));
+            [released], new MethodSetting("n", perMaterial ? "Ramberg–Osgood exponent, from each member's material" : "Ramberg–Osgood exponent",
+                exponent, StepUnit.None, perMaterial, basis));
     }
 
     /// <summary>n = f0 / 10 (f0 in MPa) for each material (Steinhardt's approximation, from memory).</summary>

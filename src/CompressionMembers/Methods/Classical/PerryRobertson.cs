@@ -70,20 +70,20 @@ public sealed class PerryRobertson : IResistanceMethod
         return fPa / (q + Math.Sqrt(Math.Max(disc, 0)));
     }
 
-    // η about one axis from the member's scalars for that axis (the kernel reads them without AxisData, see Kernel). The
-    // extreme fibre of a buckle about y lies along z, and the other way round (as AxisData takes it).
-    private double Eta(in ResolvedMember m, in ResolvedActions actions, bool aboutY) => Imperfection.Kind switch
+    // η about one axis from the member's scalars for that axis (the kernel reads them without AxisData, see Kernel).
+    private double Eta(in ResolvedMember m, in ResolvedActions actions, BucklingAxis axis)
     {
-        PerryImperfection.Model.Constant => Imperfection.Value,
-        PerryImperfection.Model.Robertson => Imperfection.Value * (aboutY ? m.SlendernessY : m.SlendernessZ),
-        PerryImperfection.Model.BowRatio => (aboutY ? m.EffectiveLengthYM : m.EffectiveLengthZM) / Imperfection.Value * FibreMax(m, aboutY) / Radius2(m, aboutY),
-        _ => (aboutY ? actions.InitialBowYM : actions.InitialBowZM) * FibreMax(m, aboutY) / Radius2(m, aboutY),
-    };
+        bool y = axis == BucklingAxis.Y;
+        return Imperfection.Kind switch
+        {
+            PerryImperfection.Model.Constant => Imperfection.Value,
+            PerryImperfection.Model.Robertson => Imperfection.Value * (y ? m.SlendernessY : m.SlendernessZ),
+            PerryImperfection.Model.BowRatio => (y ? m.EffectiveLengthYM : m.EffectiveLengthZM) / Imperfection.Value * AxisData.FibreMaxAbout(m, axis) / Radius2(m, y),
+            _ => (y ? actions.InitialBowYM : actions.InitialBowZM) * AxisData.FibreMaxAbout(m, axis) / Radius2(m, y),
+        };
 
-    private static double FibreMax(in ResolvedMember m, bool aboutY) =>
-        aboutY ? Math.Max(m.FibrePositiveZM, m.FibreNegativeZM) : Math.Max(m.FibrePositiveYM, m.FibreNegativeYM);
-
-    private static double Radius2(in ResolvedMember m, bool aboutY) => aboutY ? m.RadiusYM * m.RadiusYM : m.RadiusZM * m.RadiusZM;
+        static double Radius2(in ResolvedMember m, bool y) => y ? m.RadiusYM * m.RadiusYM : m.RadiusZM * m.RadiusZM;
+    }
 
     /// <inheritdoc/>
     public CheckResult Evaluate(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace)
@@ -114,7 +114,7 @@ public sealed class PerryRobertson : IResistanceMethod
         where TEntry : struct
     {
         // η first: Eta is a call, and values loaded before it would be saved to the stack around it.
-        double etaY = Eta(member, actions, true), etaZ = Eta(member, actions, false);
+        double etaY = Eta(member, actions, BucklingAxis.Y), etaZ = Eta(member, actions, BucklingAxis.Z);
         double e = member.ElasticModulusPa, f = member.StrengthPa, a = member.AreaM2;
         double lamY = member.SlendernessY, lamZ = member.SlendernessZ;
         double seY = Math.PI * Math.PI * e / (lamY * lamY);

@@ -31,6 +31,11 @@ internal readonly struct AxisData
     internal double FibreNegativeM { get; }
     internal double FibreMaxM => Math.Max(FibrePositiveM, FibreNegativeM);
 
+    /// <summary><see cref="FibreMaxM"/> straight from the member, for kernels that read its scalars without an AxisData:
+    /// a buckle about y moves the section along z, so its extreme fibres are the z ones, and the other way round.</summary>
+    internal static double FibreMaxAbout(in ResolvedMember m, BucklingAxis axis) =>
+        axis == BucklingAxis.Y ? Math.Max(m.FibrePositiveZM, m.FibreNegativeZM) : Math.Max(m.FibrePositiveYM, m.FibreNegativeYM);
+
     /// <summary>Relative slenderness λ̄ = λ / λ1 with λ1 = π √(E / f), i.e. √(A f / Ncr).</summary>
     internal double RelativeSlenderness(double ePa, double fPa) => Slenderness / Lambda1(ePa, fPa);
 

@@ -103,7 +103,8 @@ public class PerryRobertsonTests
     public void Identity_Setting_IsTheModelsOwnQuantity()
     {
         // A report must not show a bow ratio or Robertson's constant as η (0.1.0 printed "η : 1000" for a bow of L/1000,
-        // and "η : 0" for bows from the actions, which reads as a perfect column).
+        // and "η : 0" for bows from the actions, which reads as a perfect column). a = 0.003 is Robertson's constant for
+        // BS 449 struts (from memory), the library's default, hence its recommended-value mark.
         static MethodSetting Only(PerryImperfection m) => Assert.Single(ResistanceMethods.PerryRobertson(m).Identity.Settings);
         var constant = Only(PerryImperfection.Constant(0.2));
         Assert.Equal(("η", 0.2), (constant.Symbol, constant.Value));
