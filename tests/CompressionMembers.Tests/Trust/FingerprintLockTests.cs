@@ -42,8 +42,8 @@ public class FingerprintLockTests(ITestOutputHelper output)
         // changed; f0, fu and the HAZ factors did not change.
         yield return ["aluminium buckling constants", Pinned(new RectangularHollowSection(Mm(100), Mm(100), Mm(4)), AluminiumAlloys.EnAw6061T6Extrusion), ResistanceMethods.AluminiumBucklingConstantsAsd, "c1-a39933f44198c339"];
         // Method settings whose report wording changed after 0.1.0 (Perry–Robertson's imperfection under its own symbol, the
-        // tangent modulus's n shown as "—" when each material gives it, EN 1999-1-1's weld area as Ahaz): locked at the values the 0.1.0 code computed, so
-        // that earlier reports keep their fingerprints.
+        // tangent modulus's n shown as "—" when each material gives it, EN 1999-1-1's weld area as Ahaz): locked at the values computed by the build
+        // before the rewording (whose canonical form was 0.1.0's), so that earlier reports keep their fingerprints.
         var tube = new RectangularHollowSection(Mm(100), Mm(100), Mm(4));
         var alu = AluminiumAlloys.EnAw6082T6Extrusion;
         yield return ["Perry–Robertson, Robertson default", Pinned(tube, steel), ResistanceMethods.PerryRobertsonDefault, "c1-64b42fc3e0e27b6a"];
