@@ -441,7 +441,7 @@ public sealed class Eurocode9Compression : IResistanceMethod
         string s = ax.Sub;
         TraceCommon.Slenderness(t, ax, RefFlex);
         t.Add("λ̄" + s, "relative slenderness about " + s, "√(Aeff f0 / Ncr," + s + ")", lam, StepUnit.None, RefFlex);
-        t.Add("φ" + s, "about " + s, "0.5 [1 + α (λ̄ − λ̄0) + λ̄²]", Ec9Rules.Phi(lam, alpha, lam0), StepUnit.None, RefFlex);
+        t.Add("φ" + s, "value for the reduction factor about " + s, "0.5 [1 + α (λ̄ − λ̄0) + λ̄²]", Ec9Rules.Phi(lam, alpha, lam0), StepUnit.None, RefFlex);
         t.Add("χ" + s, "reduction factor for flexural buckling about " + s, lam <= lam0 ? "1 (λ̄ ≤ λ̄0)" : "1 / (φ + √(φ² − λ̄²)) ≤ 1", chi, StepUnit.None, RefFlex);
         t.Add("κ" + s, "factor for the weakening of welding", longitudinal
             ? (cls == BucklingClass.A ? "1 − (1 − A1/A) 10^(−λ̄) − (0.05 + 0.1 A1/A) λ̄^(1.3(1 − λ̄))" : "1 + 0.04 (4λ̄)^(0.5 − λ̄) − 0.22 λ̄^(1.4(1 − λ̄)) (1 for λ̄ ≤ 0.2)")
