@@ -42,17 +42,18 @@ public static class NumberFormat
     /// <summary>A value stored in SI, in the report's display unit for its kind.</summary>
     /// <param name="siValue">The value in SI.</param>
     /// <param name="unit">Its kind.</param>
-    /// <returns>Number and unit, such as "245.7 kN".</returns>
+    /// <returns>Number and unit, such as "245.7 kN"; "—" alone for NaN (no value).</returns>
     public static string Quantity(double siValue, StepUnit unit) => Quantity(siValue, unit, ReportUnits.Metric);
 
     /// <summary>A value stored in SI, in a chosen set of display units.</summary>
     /// <param name="siValue">The value in SI.</param>
     /// <param name="unit">Its kind.</param>
     /// <param name="units">The display units.</param>
-    /// <returns>Number and unit, such as "245.7 kN" or "1 350 psi".</returns>
+    /// <returns>Number and unit, such as "245.7 kN" or "1 350 psi"; "—" alone for NaN (no value), without a unit.</returns>
     /// <exception cref="System.ArgumentOutOfRangeException">The display units are undefined.</exception>
     public static string Quantity(double siValue, StepUnit unit, ReportUnits units) => unit switch
     {
+        _ when double.IsNaN(siValue) && units is ReportUnits.Metric or ReportUnits.UsCustomary => "—",
         StepUnit.None => Number(Chop(siValue)),
         StepUnit.Boolean => siValue != 0 ? "yes" : "no",
         _ => Number(Chop(Display(siValue, unit, units))) + " " + UnitText(unit, units),

@@ -1,3 +1,4 @@
+using System;
 using CompressionMembers.Reporting;
 using CompressionMembers.Results;
 
@@ -28,4 +29,18 @@ public class NumberFormatTests
     [InlineData(1800.0, StepUnit.Time, "30 min")]
     [InlineData(-3.469e-18, StepUnit.Length, "0 mm")]
     public void Quantity_InDisplayUnits(double si, StepUnit unit, string expected) => Assert.Equal(expected, NumberFormat.Quantity(si, unit));
+
+    // No value (NaN) is a dash alone, in either set of units: "— kN" read as a force of some unknown size.
+    [Theory]
+    [InlineData(StepUnit.Force, ReportUnits.Metric)]
+    [InlineData(StepUnit.Force, ReportUnits.UsCustomary)]
+    [InlineData(StepUnit.Stress, ReportUnits.Metric)]
+    [InlineData(StepUnit.None, ReportUnits.Metric)]
+    [InlineData(StepUnit.Boolean, ReportUnits.Metric)]
+    public void Quantity_NoValue_IsADashWithoutUnit(StepUnit unit, ReportUnits units) =>
+        Assert.Equal("—", NumberFormat.Quantity(double.NaN, unit, units));
+
+    [Fact]
+    public void Quantity_UndefinedUnits_StillRefused_EvenForNoValue() =>
+        Assert.Throws<ArgumentOutOfRangeException>(() => NumberFormat.Quantity(double.NaN, StepUnit.Force, (ReportUnits)99));
 }
