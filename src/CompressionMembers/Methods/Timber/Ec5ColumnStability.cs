@@ -340,7 +340,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     {
         string ruleY = SizeFactorRule(mat, i.Rectangular, i.HM, "h"), ruleZ = SizeFactorRule(mat, i.Rectangular, i.BM, "b");
         string src = mat.Source;
-        trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; values from {src}.", src);
+        trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; characteristic values from the source cited.", src);
         trace.Add("fc,0,k", "characteristic compression strength parallel to grain", TimberRules.Input, i.Fc0kPa, StepUnit.Stress, src);
         trace.Add("fm,k", "characteristic bending strength", TimberRules.Input, i.FmkPa, StepUnit.Stress, src);
         trace.Add("E0,05", "fifth-percentile modulus parallel to grain (stability)", TimberRules.Input, i.E005Pa, StepUnit.Stress, src);

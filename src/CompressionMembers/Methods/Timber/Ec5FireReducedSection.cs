@@ -351,7 +351,7 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     {
         string src = mat.Source;
         TimberRules.Dimensions(member, out double b, out double h);
-        trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; values from {src}.", src);
+        trace.Note($"{mat.Name}: {TimberRules.ProductText(mat.Product)}; characteristic values from the source cited.", src);
         trace.Add("fc,0,k", "characteristic compression strength parallel to grain", TimberRules.Input, member.StrengthPa, StepUnit.Stress, src);
         trace.Add("fm,k", "characteristic bending strength", TimberRules.Input, mat.BendingStrength.Pascals, StepUnit.Stress, src);
         trace.Add("E0,05", "fifth-percentile modulus parallel to grain", TimberRules.Input, member.ElasticModulusPa, StepUnit.Stress, src);

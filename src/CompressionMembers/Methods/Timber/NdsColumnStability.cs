@@ -423,7 +423,7 @@ public sealed class NdsColumnStability : IResistanceMethod
         bool ltb, double le, double rb, double fbE, double cl, double fb1P, double fb2P, double fcE1, double fcE2, double u, double den1, double den2, bool unbounded)
     {
         string src = mat.Source;
-        trace.Note($"{mat.Name}: {ProductText(mat.Product)} reference design values from {src}; {(asd ? "ASD" : "LRFD")}.", src);
+        trace.Note($"{mat.Name}: {ProductText(mat.Product)} reference design values from the source cited; {(asd ? "ASD" : "LRFD")}.", src);
         trace.Add("Fc", "reference compression design value parallel to grain", TimberRules.Input, fcRef, StepUnit.Stress, src);
         trace.Add("Fb", "reference bending design value", TimberRules.Input, fbRef, StepUnit.Stress, src);
         trace.Add("Emin", "reference modulus for beam and column stability", TimberRules.Input, eminRef, StepUnit.Stress, src);
