@@ -52,6 +52,8 @@ public sealed class CalculationStep : IEquatable<CalculationStep>
     /// <inheritdoc/>
     public override int GetHashCode() => HashCode.Combine(Symbol, Meaning, Expression, Value, Unit, Reference);
 
-    /// <inheritdoc/>
-    public override string ToString() => $"{Symbol} = {Value} ({Meaning})";
+    /// <summary>The step in one line: symbol, value in SI units (the shortest text that reads back as the same double) and
+    /// meaning, written the same in every culture.</summary>
+    /// <returns>The line.</returns>
+    public override string ToString() => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{Symbol} = {Value} ({Meaning})");
 }

@@ -137,6 +137,15 @@ public readonly struct CheckResult
     private static bool Close(double a, double b, double tol) =>
         a.Equals(b) || Math.Abs(a - b) <= tol * Math.Max(Math.Abs(a), Math.Abs(b));
 
+    /// <summary>One line for a script's output or a debugger — member, utilisation and verdict, resistance and demand, the
+    /// governing check and the method — in the same text on every machine and culture (numbers to six significant
+    /// figures, kN). Not a calculation: render the result with a report for its derivation.</summary>
+    /// <returns>Such as <c>post: utilisation 0.408122, passes; NRd = 245.036 kN, NEd = 100 kN; EN 1995-1-1 6.3.2 (6.26) … [EN 1995-1-1 timber column]</c>,
+    /// or <c>(no result)</c> for the default value.</returns>
+    public override string ToString() => Member is null ? "(no result)" :
+        $"{Member.Name}: utilisation {Internal.Guard.Show(Utilisation)}, {(Passed ? "passes" : "FAILS")}; NRd = {Internal.Guard.Show(DesignResistanceN / 1e3)} kN, " +
+        $"NEd = {Internal.Guard.Show(Actions.Resolved.AxialForceN / 1e3)} kN; {GoverningCheck} [{Method.Identity.Name}]";
+
     /// <summary>Orders results by utilisation, lowest first (NaN last).</summary>
     public static IComparer<CheckResult> ByUtilisation { get; } =
         Comparer<CheckResult>.Create((a, b) => (double.IsNaN(a.Utilisation), double.IsNaN(b.Utilisation)) switch
