@@ -173,6 +173,34 @@ public sealed class DesignActions
     public DesignActions WithName(string name) =>
         new(Nm(name), AxialCompression, EccentricityY, EccentricityZ, EndMomentYTop, EndMomentYBottom, EndMomentZTop, EndMomentZBottom, InitialBowY, InitialBowZ, LoadDuration);
 
+    /// <summary>The case in one line, the same in every culture: the name, NEd, and whatever else is given.</summary>
+    /// <returns>Such as <c>dead + snow: NEd = 180 kN, ey = 30 mm, medium-term</c>.</returns>
+    public override string ToString()
+    {
+        var sb = new System.Text.StringBuilder(Name).Append(": NEd = ").Append(Si.Given(AxialCompression));
+        if (EccentricityY.Meters != 0) sb.Append(", ey = ").Append(Si.Given(EccentricityY));
+        if (EccentricityZ.Meters != 0) sb.Append(", ez = ").Append(Si.Given(EccentricityZ));
+        if (EndMomentYTop.NewtonMeters != 0 || EndMomentYBottom.NewtonMeters != 0)
+            sb.Append(", My = ").Append(Si.Given(EndMomentYTop)).Append(" top, ").Append(Si.Given(EndMomentYBottom)).Append(" bottom");
+        if (EndMomentZTop.NewtonMeters != 0 || EndMomentZBottom.NewtonMeters != 0)
+            sb.Append(", Mz = ").Append(Si.Given(EndMomentZTop)).Append(" top, ").Append(Si.Given(EndMomentZBottom)).Append(" bottom");
+        if (InitialBowY is { } by) sb.Append(", bow about y = ").Append(Si.Given(by));
+        if (InitialBowZ is { } bz) sb.Append(", bow about z = ").Append(Si.Given(bz));
+        if (LoadDuration != LoadDurationClass.Unspecified) sb.Append(", ").Append(DurationText(LoadDuration));
+        return sb.ToString();
+    }
+
+    /// <summary>The load-duration class in words, as reports write it.</summary>
+    internal static string DurationText(LoadDurationClass d) => d switch
+    {
+        LoadDurationClass.Permanent => "permanent",
+        LoadDurationClass.LongTerm => "long-term",
+        LoadDurationClass.MediumTerm => "medium-term",
+        LoadDurationClass.ShortTerm => "short-term",
+        LoadDurationClass.Instantaneous => "instantaneous",
+        _ => "unspecified",
+    };
+
     internal void AddCanonical(CanonicalForm form)
     {
         form.Add("actions.name", Name).Add("actions.N", AxialCompression.Newtons)

@@ -19,4 +19,8 @@ public readonly struct Applicability
 
     /// <summary>Why not, or null when it applies.</summary>
     public string? Reason { get; }
+
+    /// <summary>The verdict in words.</summary>
+    /// <returns><c>applicable</c>, or <c>not applicable: </c> and the reason.</returns>
+    public override string ToString() => Reason is null ? "applicable" : "not applicable: " + Reason;
 }

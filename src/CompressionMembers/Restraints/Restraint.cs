@@ -55,6 +55,10 @@ public sealed class Restraint
     /// <returns>The copy.</returns>
     public Restraint WithTorsional(AxisRestraint torsional) => new(AboutY, AboutZ, torsional);
 
+    /// <summary>The three restraints in one line.</summary>
+    /// <returns>Such as <c>about y: pinned–pinned, theoretical value; K = 1 | about z: … | twist: …</c>.</returns>
+    public override string ToString() => $"about y: {AboutY} | about z: {AboutZ} | twist: {Torsional}";
+
     private string? _canonicalSegment;
 
     /// <summary>The restraint's canonical lines, formed on first use and kept (a restraint never changes).</summary>

@@ -50,4 +50,12 @@ public readonly struct AxisOutcome
     public Force CriticalForce => Force.FromNewtons(CriticalForceN);
     /// <summary>Resistance for this axis.</summary>
     public Force Resistance => Force.FromNewtons(ResistanceN);
+
+    /// <summary>The outcome in one line, the same in every culture (six significant figures; NaN where a method does not
+    /// use a value).</summary>
+    /// <returns>Such as <c>Lcr = 3600 mm, λ = 89.08, λ̄ = 1.464, Ncr = 493.7 kN, reduction 0.4261, resistance 277.5 kN</c>
+    /// (to six figures), or <c>not evaluated</c>.</returns>
+    public override string ToString() => !IsEvaluated ? "not evaluated" :
+        $"Lcr = {Internal.Guard.Show(EffectiveLengthM * 1e3)} mm, λ = {Internal.Guard.Show(Slenderness)}, λ̄ = {Internal.Guard.Show(RelativeSlenderness)}, " +
+        $"Ncr = {Internal.Guard.Show(CriticalForceN / 1e3)} kN, reduction {Internal.Guard.Show(ReductionFactor)}, resistance {Internal.Guard.Show(ResistanceN / 1e3)} kN";
 }

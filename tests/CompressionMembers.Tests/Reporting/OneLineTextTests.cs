@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Threading;
 using CompressionMembers.Actions;
 using CompressionMembers.Materials;
+using CompressionMembers.Materials.Timber;
 using CompressionMembers.Members;
 using CompressionMembers.Methods;
 using CompressionMembers.Restraints;
@@ -70,4 +71,47 @@ public class OneLineTextTests
         }
         finally { Thread.CurrentThread.CurrentCulture = old; }
     }
+
+    [Fact]
+    public void DesignActions_ToString_SaysWhatIsGiven_InEveryCulture()
+    {
+        var old = Thread.CurrentThread.CurrentCulture;
+        try
+        {
+            Thread.CurrentThread.CurrentCulture = new CultureInfo("de-DE");
+            Assert.Equal("c1: NEd = 12.5 kN", DesignActions.Compression(Force.FromKilonewtons(12.5), "c1").ToString());
+            var a = DesignActions.Compression(Force.FromKilonewtons(180), "dead + snow")
+                .WithEccentricity(Length.FromMillimeters(30), Length.Zero)
+                .WithEndMomentsAboutY(Torque.FromKilonewtonMeters(2.5), Torque.FromKilonewtonMeters(-1.25))
+                .WithInitialBow(null, Length.FromMillimeters(7.2))
+                .WithLoadDuration(LoadDurationClass.MediumTerm);
+            Assert.Equal("dead + snow: NEd = 180 kN, ey = 30 mm, My = 2.5 kN·m top, -1.25 kN·m bottom, bow about z = 7.2 mm, medium-term", a.ToString());
+        }
+        finally { Thread.CurrentThread.CurrentCulture = old; }
+    }
+
+    [Fact]
+    public void Restraint_Applicability_Method_AndAxisOutcome_HaveOneLineTexts()
+    {
+        Assert.Equal("about y: pinned–pinned, theoretical value; K = 1 | about z: pinned–pinned, theoretical value; K = 1 | twist: pinned–pinned, theoretical value; K = 1",
+            Restraint.PinnedBothAxes.ToString());
+        Assert.Equal("applicable", Applicability.Applicable.ToString());
+        Assert.Equal("not applicable: too short", Applicability.NotApplicable("too short").ToString());
+        Assert.Equal(ResistanceMethods.Ec5Column.Identity.ToString(), ResistanceMethods.Ec5Column.ToString());
+        Assert.StartsWith("EN 1995-1-1", ResistanceMethods.Ec5Column.ToString().Split('(')[1]);
+        Assert.Equal("not evaluated", default(AxisOutcome).ToString());
+        var old = Thread.CurrentThread.CurrentCulture;
+        try
+        {
+            Thread.CurrentThread.CurrentCulture = new CultureInfo("fr-FR");
+            var y = Tube(100).AboutY;
+            // Lcr = 7.2 m; λ = L / i with i = √((75² + 70²) / 4) mm of the 150 × 5 tube.
+            Assert.StartsWith("Lcr = 7200 mm, λ = " + Internal_Show(7200 / System.Math.Sqrt((75.0 * 75 + 70.0 * 70) / 4)) + ", ", y.ToString());
+            Assert.Contains(" kN, reduction ", y.ToString());
+        }
+        finally { Thread.CurrentThread.CurrentCulture = old; }
+    }
+
+    // Six significant figures, as Guard.Show writes a value of this size.
+    private static string Internal_Show(double v) => System.Math.Round(v, 6 - 1 - (int)System.Math.Floor(System.Math.Log10(v))).ToString("0.##########", CultureInfo.InvariantCulture);
 }

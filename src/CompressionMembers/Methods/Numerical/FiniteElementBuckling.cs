@@ -48,6 +48,9 @@ public sealed class FiniteElementBuckling : IResistanceMethod
 
     /// <inheritdoc/>
     public MethodIdentity Identity { get; }
+    /// <summary>The method in words: <see cref="MethodIdentity.ToString"/> of its <see cref="Identity"/>.</summary>
+    /// <returns>Such as "EN 1995-1-1 timber column (EN 1995-1-1 2004+A2:2014, 6.3.2, 6.3.3, 6.2.4)".</returns>
+    public override string ToString() => Identity.ToString();
 
     /// <inheritdoc/>
     public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)

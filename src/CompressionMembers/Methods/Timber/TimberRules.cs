@@ -98,15 +98,7 @@ internal static class TimberRules
         }
     }
 
-    internal static string DurationText(LoadDurationClass d) => d switch
-    {
-        LoadDurationClass.Permanent => "permanent",
-        LoadDurationClass.LongTerm => "long-term",
-        LoadDurationClass.MediumTerm => "medium-term",
-        LoadDurationClass.ShortTerm => "short-term",
-        LoadDurationClass.Instantaneous => "instantaneous",
-        _ => "unspecified",
-    };
+    internal static string DurationText(LoadDurationClass d) => DesignActions.DurationText(d);
 
     internal static string ServiceClassText(ServiceClass s) => s switch
     {
