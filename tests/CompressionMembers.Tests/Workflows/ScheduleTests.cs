@@ -68,6 +68,18 @@ public class ScheduleTests
     }
 
     [Fact]
+    public void Outcome_AndRows_HaveOneLineTexts()
+    {
+        // One good row and one that names no known material: the outcome counts both, each row says where it stands.
+        const string csv = "member,material,section,method,length_mm,N_kN\nS1,generic-steel,rect 50x50,euler,1000,10\nS2,unobtainium,rect 50x50,euler,1000,10\n";
+        var outcome = ScheduleChecker.Check(MemberSchedule.ReadCsv(new StringReader(csv), "two rows"), BatchOptions.Serial);
+        Assert.Equal("schedule \"two rows\": 2 rows: 1 passed, 0 failed, 1 errors", outcome.ToString());
+        Assert.StartsWith("line 2: S1: utilisation ", outcome.Rows[0].ToString());
+        Assert.StartsWith("line 3: error: ", outcome.Rows[1].ToString());
+        Assert.Contains("unobtainium", outcome.Rows[1].ToString());
+    }
+
+    [Fact]
     public void WriteCsv_FormulaLikeText_IsEscaped()
     {
         const string csv = "member,material,section,method,length_mm,N_kN\n=HYPERLINK(\"x\"),generic-steel,rect 50x50,euler,1000,10\n@SUM(A1),generic-steel,rect 50x50,euler,1000,10\n";

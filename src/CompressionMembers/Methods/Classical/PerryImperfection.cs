@@ -26,6 +26,10 @@ public sealed class PerryImperfection
     /// <summary>The model in words, for reports.</summary>
     public string Description { get; }
 
+    /// <summary>The imperfection in words: <see cref="Description"/>.</summary>
+    /// <returns>The description.</returns>
+    public override string ToString() => Description;
+
     /// <summary>The same η about both axes.</summary>
     /// <param name="eta">η ≥ 0 (0 is the perfect column).</param>
     /// <returns>The model.</returns>

@@ -54,6 +54,11 @@ public sealed class ScheduleOutcome
     /// <summary>Rows with an error.</summary>
     public int ErrorCount { get; }
 
+    /// <summary>The counts in one line, as the streamed check's summary writes them.</summary>
+    /// <returns>Such as <c>schedule "hall": 120 rows: 117 passed, 2 failed, 1 errors</c>.</returns>
+    public override string ToString() => string.Create(System.Globalization.CultureInfo.InvariantCulture,
+        $"schedule \"{Schedule.Name}\": {_rows.Length} rows: {PassedCount} passed, {FailedCount} failed, {ErrorCount} errors");
+
     /// <summary>Writes the results CSV: a header and one line per row. Text cells that a spreadsheet would run as a
     /// formula (starting with = + - @, a tab or CR) are escaped with a leading apostrophe; numbers are written with
     /// the shortest round-trip form in the invariant culture. Lines end with "\n".</summary>

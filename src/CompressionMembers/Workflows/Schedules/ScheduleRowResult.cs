@@ -28,6 +28,10 @@ public sealed class ScheduleRowResult
     /// <summary>The input fingerprint of the check ("" for an error row).</summary>
     public string Fingerprint { get; }
 
+    /// <summary>The row in one line: where it stands, then its result (<see cref="CheckResult.ToString"/>) or its error.</summary>
+    /// <returns>Such as <c>line 4: C1: utilisation 0.7676, passes; …</c> or <c>line 5: error: …</c>.</returns>
+    public override string ToString() => Result is { } r ? $"{Item.Location}: {r}" : $"{Item.Location}: error: {Error}";
+
     /// <summary>Passed, failed or error.</summary>
     public RowStatus Status => Result is { } r ? (r.Passed ? RowStatus.Passed : RowStatus.Failed) : RowStatus.Error;
 }
