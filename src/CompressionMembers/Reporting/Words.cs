@@ -36,13 +36,5 @@ public static class Words
     /// <summary>A load-duration class in words.</summary>
     /// <param name="d">The class.</param>
     /// <returns>The words.</returns>
-    public static string Duration(LoadDurationClass d) => d switch
-    {
-        LoadDurationClass.Permanent => "permanent",
-        LoadDurationClass.LongTerm => "long-term",
-        LoadDurationClass.MediumTerm => "medium-term",
-        LoadDurationClass.ShortTerm => "short-term",
-        LoadDurationClass.Instantaneous => "instantaneous",
-        _ => "unspecified",
-    };
+    public static string Duration(LoadDurationClass d) => DesignActions.DurationText(d);
 }
