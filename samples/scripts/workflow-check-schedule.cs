@@ -8,7 +8,9 @@ using System.IO;
 using CompressionMembers.Workflows.Batch;
 using CompressionMembers.Workflows.Schedules;
 
-string input = Path.Combine("data", "boathouse-schedule.csv");
+// The data folder beside this script, wherever it is run from (a file-based app knows its own folder).
+string here = AppContext.GetData("EntryPointFileDirectoryPath") as string ?? ".";
+string input = Path.Combine(here, "data", "boathouse-schedule.csv");
 using var reader = new StreamReader(input);
 var schedule = MemberSchedule.ReadCsv(reader, "boathouse-schedule.csv");
 var progress = new Progress<BatchProgress>(_ => { });
