@@ -47,7 +47,7 @@ public sealed class Figure
     /// <returns>The SVG document.</returns>
     public string ToSvg()
     {
-        string svg = _plot.GetSvgXml(Width, Height);
+        string svg = SvgWithLinePatterns();
         if (_marks.Count == 0) return svg;
         _plot.RenderInMemory(Width, Height);
         var inv = CultureInfo.InvariantCulture;
@@ -62,6 +62,50 @@ public sealed class Figure
         int end = svg.LastIndexOf("</svg>", StringComparison.Ordinal);
         return end < 0 ? svg : svg[..end] + sb + svg[end..];
     }
+
+    // The SVG writer under ScottPlot drops dash patterns (a dashed Euler curve came out solid, and a capacity chart's ninth
+    // section, dashed in the PNG, had the same solid line and colour as its first) and says "Unsupported path effect" on
+    // the standard error for each. So for the SVG every patterned line is drawn solid in a colour of its own that no chart
+    // uses, and that colour is then replaced by the line's own colour with the pattern as stroke-dasharray: the same
+    // dashes as the PNG, in the plot and in its legend, and nothing written to the console.
+    private string SvgWithLinePatterns()
+    {
+        var patterned = new List<(ScottPlot.LineStyle Style, ScottPlot.Color Color, ScottPlot.LinePattern Pattern)>();
+        foreach (var p in _plot.GetPlottables())
+            if (p is ScottPlot.IHasLine { LineStyle: { } style } && style.Pattern.Intervals is { Length: > 0 }
+                && !patterned.Exists(q => ReferenceEquals(q.Style, style)))
+                patterned.Add((style, style.Color, style.Pattern));
+        if (patterned.Count == 0) return _plot.GetSvgXml(Width, Height);
+        string svg;
+        try
+        {
+            for (int i = 0; i < patterned.Count; i++)
+            {
+                patterned[i].Style.Pattern = ScottPlot.LinePattern.Solid;
+                patterned[i].Style.Color = StandIn(i);
+            }
+            svg = _plot.GetSvgXml(Width, Height);
+        }
+        finally
+        {
+            foreach (var (style, color, pattern) in patterned) { style.Color = color; style.Pattern = pattern; }
+        }
+        var inv = CultureInfo.InvariantCulture;
+        for (int i = 0; i < patterned.Count; i++)
+        {
+            var (_, color, pattern) = patterned[i];
+            string dashes = string.Join(" ", Array.ConvertAll(pattern.Intervals, v => v.ToString("0.###", inv)));
+            string stroke = $"stroke=\"{Hex(color)}\"" + (color.A < 255 ? string.Create(inv, $" stroke-opacity=\"{color.A / 255.0:0.###}\"") : "");
+            svg = svg.Replace($"stroke=\"{Hex(StandIn(i))}\"", $"{stroke} stroke-dasharray=\"{dashes}\"", StringComparison.Ordinal);
+        }
+        return svg;
+    }
+
+    // Stand-in colours #01 2g hh (ghh = the line's number): darker than any colour of the palette and not ScottPlot's own
+    // near-black (#010101, the legend's shadow), so never a chart's stroke.
+    private static ScottPlot.Color StandIn(int i) => new((byte)1, (byte)(0x20 + ((i >> 8) & 0x0F)), (byte)(i & 0xFF));
+
+    private static string Hex(ScottPlot.Color c) => string.Create(CultureInfo.InvariantCulture, $"#{c.R:X2}{c.G:X2}{c.B:X2}");
 
     /// <summary>Writes the SVG to a file.</summary>
     /// <param name="path">The file.</param>

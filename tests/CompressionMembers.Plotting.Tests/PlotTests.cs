@@ -66,6 +66,38 @@ public sealed class PlotTests : IDisposable
     }
 
     [Fact]
+    public void Svg_KeepsTheDashPatterns_OfThePngLines()
+    {
+        // The column curve draws Euler dashed (10 on, 10 off) and Johnson densely dashed (6, 6); the SVG writer underneath
+        // drops such patterns, so the figure writes them as stroke-dasharray itself: on the curve and on its legend line.
+        var r = Check.EvaluateWithTrace(Strut(3200), DesignActions.Compression(Force.FromKilonewtons(85)), ResistanceMethods.Johnson);
+        var fig = ColumnCurvePlot.Create(r, 900, 600);
+        string svg = fig.ToSvg();
+        Assert.Equal(2, Count(svg, "stroke=\"#4A6FA5\" stroke-dasharray=\"10 10\""));   // Palette.Euler
+        Assert.Equal(2, Count(svg, "stroke=\"#C9821E\" stroke-dasharray=\"6 6\""));     // Palette.Johnson
+        Assert.DoesNotContain("stroke=\"#0120", svg);                                    // no stand-in colour left
+        // The lines got their own colours and patterns back (the SVG writer numbers its clip paths afresh each time).
+        static string Clips(string x) => System.Text.RegularExpressions.Regex.Replace(x, "cl_[0-9a-f]+", "cl_");
+        Assert.Equal(Clips(svg), Clips(fig.ToSvg()));
+        string png1 = Path.Combine(_dir, "a.png"), png2 = Path.Combine(_dir, "b.png");
+        ColumnCurvePlot.Create(r, 900, 600).SavePng(png1);
+        fig.SavePng(png2);                                                               // after ToSvg: the same PNG as a fresh figure
+        Assert.Equal(File.ReadAllBytes(png1), File.ReadAllBytes(png2));
+
+        // A capacity chart draws its ninth and later sections dashed in the first sections' colours: in the SVG too.
+        var t = CapacityTable.Compute(SectionCatalogues.AluminiumGenericShapes.Entries.Take(10), IsotropicMaterial.GenericStructuralSteel,
+            ResistanceMethods.PerryRobertsonDefault, Enumerable.Range(1, 6).Select(k => Length.FromMeters(0.5 * k)));
+        Assert.Equal(4, Count(CapacityChart.Create(t).ToSvg(), "stroke-dasharray=\"10 10\""));   // 2 sections × (line + legend)
+    }
+
+    private static int Count(string text, string what)
+    {
+        int n = 0;
+        for (int i = text.IndexOf(what, StringComparison.Ordinal); i >= 0; i = text.IndexOf(what, i + what.Length, StringComparison.Ordinal)) n++;
+        return n;
+    }
+
+    [Fact]
     public void BucklingModePlot_NumericalModes_RendersPngWithEveryModeInTheLegend()
     {
         var r = Restraint.Same(AxisRestraint.FromEndConditions(EndCondition.Fixed, EndCondition.Free, EffectiveLengthBasis.Theoretical));
