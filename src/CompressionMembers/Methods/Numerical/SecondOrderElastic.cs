@@ -29,7 +29,7 @@ public sealed class SecondOrderElastic : IResistanceMethod
     /// <inheritdoc/>
     public MethodIdentity Identity { get; } = new("Second-order elastic analysis to first yield (finite elements)", "Beam-column theory (Timoshenko & Gere, Theory of Elastic Stability)", "2nd ed.", "§1.3–1.4, §1.11");
     /// <summary>The method in words: <see cref="MethodIdentity.ToString"/> of its <see cref="Identity"/>.</summary>
-    /// <returns>Such as "EN 1995-1-1 timber column (EN 1995-1-1 2004+A2:2014, 6.3.2, 6.3.3, 6.2.4)".</returns>
+    /// <returns>The name, standard, edition and clause in one line.</returns>
     public override string ToString() => Identity.ToString();
 
     /// <inheritdoc/>

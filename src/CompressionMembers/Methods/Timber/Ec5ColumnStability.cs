@@ -86,7 +86,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
     /// <inheritdoc/>
     public MethodIdentity Identity { get; }
     /// <summary>The method in words: <see cref="MethodIdentity.ToString"/> of its <see cref="Identity"/>.</summary>
-    /// <returns>Such as "EN 1995-1-1 timber column (EN 1995-1-1 2004+A2:2014, 6.3.2, 6.3.3, 6.2.4)".</returns>
+    /// <returns>The name, standard, edition and clause in one line.</returns>
     public override string ToString() => Identity.ToString();
 
     /// <summary>The service class.</summary>
