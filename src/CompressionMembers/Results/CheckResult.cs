@@ -142,9 +142,10 @@ public readonly struct CheckResult
     /// figures, kN). Not a calculation: render the result with a report for its derivation.</summary>
     /// <returns>Such as <c>post: utilisation 0.408122, passes; NRd = 245.036 kN, NEd = 100 kN; EN 1995-1-1 6.3.2 (6.26) … [EN 1995-1-1 timber column]</c>,
     /// or <c>(no result)</c> for the default value.</returns>
+    // Never throws: a result a user's method built from default resolved actions or without a method still prints.
     public override string ToString() => Member is null ? "(no result)" :
         $"{Member.Name}: utilisation {Internal.Guard.Show(Utilisation)}, {(Passed ? "passes" : "FAILS")}; NRd = {Internal.Guard.Show(DesignResistanceN / 1e3)} kN, " +
-        $"NEd = {Internal.Guard.Show(Actions.Resolved.AxialForceN / 1e3)} kN; {GoverningCheck} [{Method.Identity.Name}]";
+        $"NEd = {(Actions is null ? "—" : Internal.Guard.Show(Actions.Resolved.AxialForceN / 1e3))} kN; {GoverningCheck} [{Method?.Identity?.Name ?? "method without a name"}]";
 
     /// <summary>Orders results by utilisation, lowest first (NaN last).</summary>
     public static IComparer<CheckResult> ByUtilisation { get; } =

@@ -57,6 +57,16 @@ public class OneLineTextTests
     }
 
     [Fact]
+    public void CheckResult_ToString_NeverThrows_ForAResultAUserBuiltWithoutActionsOrMethod()
+    {
+        // A method author's result from default resolved actions and no method (the constructor allows both): it prints.
+        var tube = Member.Create(new CircularHollowSection(Length.FromMillimeters(150), Length.FromMillimeters(5)),
+            IsotropicMaterial.GenericStructuralSteel, Length.FromMeters(7.2), Restraint.PinnedBothAxes, "tube T2");
+        var r = new CheckResult(tube.Resolved, default, null!, 2000, 0.5, BucklingAxis.Y, FailureMode.FlexuralBuckling, null!, default, default, default, null);
+        Assert.Equal("tube T2: utilisation 0.5, passes; NRd = 2 kN, NEd = — kN;  [method without a name]", r.ToString());
+    }
+
+    [Fact]
     public void CalculationStep_ToString_IsTheSameInEveryCulture()
     {
         var old = Thread.CurrentThread.CurrentCulture;
