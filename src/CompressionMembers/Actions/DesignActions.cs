@@ -61,7 +61,13 @@ public sealed class DesignActions
         return new DesignActions(Nm(name), axialCompression, Length.Zero, Length.Zero, Torque.Zero, Torque.Zero, Torque.Zero, Torque.Zero, null, null, LoadDurationClass.Unspecified);
     }
 
-    private static string Nm(string? name) => string.IsNullOrWhiteSpace(name) ? "action case" : name;
+    private static string Nm(string? name) => string.IsNullOrWhiteSpace(name) ? DefaultName : name;
+
+    /// <summary>The name a case gets when none is given (part of the input fingerprint, so it stays "action case").</summary>
+    internal const string DefaultName = "action case";
+
+    /// <summary>Whether the case was given a name of its own (reports then show it; an unnamed case reads "not named").</summary>
+    internal bool IsNamed => !string.Equals(Name, DefaultName, StringComparison.Ordinal);
 
     /// <summary>Case name.</summary>
     public string Name { get; }

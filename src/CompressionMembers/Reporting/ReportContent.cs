@@ -51,7 +51,7 @@ internal sealed class ReportContent
         c.Inputs.Add(("restraint about y", m.Restraint.AboutY.ToString()));
         c.Inputs.Add(("restraint about z", m.Restraint.AboutZ.ToString()));
         c.Inputs.Add(("restraint, twist", m.Restraint.Torsional.ToString()));
-        c.Inputs.Add(("action case", a.Name));
+        c.Inputs.Add(("action case", a.IsNamed ? a.Name : "not named"));
         c.Inputs.Add(("NEd", Si.Given(a.AxialCompression) + " (design compression)"));
         if (a.EccentricityY.Meters != 0) c.Inputs.Add(("ey", Si.Given(a.EccentricityY) + " (bends about y)"));
         if (a.EccentricityZ.Meters != 0) c.Inputs.Add(("ez", Si.Given(a.EccentricityZ) + " (bends about z)"));

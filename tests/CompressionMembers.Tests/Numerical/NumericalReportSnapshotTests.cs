@@ -52,6 +52,21 @@ public class NumericalReportSnapshotTests
     }
 
     [Fact]
+    public void Report_SecondOrder_UnnamedCase_ShowsNoPlaceholderName()
+    {
+        // A case made without a name carries the default "action case" (part of the fingerprint); the report leaves it out
+        // rather than print "(action case)" as if it were a name. A named case keeps its name (the snapshot above).
+        var member = Member.Create(new RectangleSection(Length.FromMillimeters(40), Length.FromMillimeters(60)), Fixtures.Steel,
+            Length.FromMillimeters(2500), Restraint.PinnedBothAxes, "eccentric strut");
+        var actions = DesignActions.Compression(Force.FromKilonewtons(60)).WithEccentricity(Length.FromMillimeters(5), Length.Zero);
+        string report = SecondOrderAnalysis.Analyse(member, actions, BucklingAxis.Y, steps: 2).ToReport();
+        Assert.Contains("  design load N = 60 kN\n", report.Replace("\r\n", "\n", System.StringComparison.Ordinal));
+        Assert.DoesNotContain("(action case)", report);
+        Assert.Contains("action case       : not named", CompressionMembers.Reporting.TextReport.Render(
+            Check.EvaluateWithTrace(member, actions, ResistanceMethods.Secant)));
+    }
+
+    [Fact]
     public void Text_FiniteElementCriticalWithEndSprings()
     {
         // The check report of the FE method for a member whose K about y came from end springs: the report shows how K was obtained.

@@ -83,7 +83,7 @@ internal static class NumericalReport
         Line(sb, "Member and actions");
         Line(sb, $"  {m.Material.Name}; {m.Section.Designation}; L = {Mm(m.Length.Meters)}, pinned at both ends about {ax}");
         Line(sb, $"  A = {N(r.AreaM2 * 1e6)} mm², I{ax} = {N(r.SecondMomentM4 * 1e12)} mm⁴, extreme fibres {N(r.FibrePositiveM * 1e3)} mm (+) and {N(r.FibreNegativeM * 1e3)} mm (−)");
-        Line(sb, $"  design load N = {Kn(r.AtDesignLoad.LoadN)} ({r.Actions.Name})");
+        Line(sb, $"  design load N = {Kn(r.AtDesignLoad.LoadN)}" + (r.Actions.IsNamed ? $" ({r.Actions.Name})" : ""));
         Line(sb, $"  load-line offset: bottom e = {Mm(r.EccentricityBottomM)}, top e = {Mm(r.EccentricityTopM)} (eccentricity + end moment / N)");
         Line(sb, $"  initial bow e0 = {Mm(r.BowM)} (half sine, on the unfavourable side)");
         Line(sb, $"  mesh: {r.ElementCount} Euler–Bernoulli elements");
