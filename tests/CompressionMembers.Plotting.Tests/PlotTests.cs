@@ -68,7 +68,8 @@ public sealed class PlotTests : IDisposable
     [Fact]
     public void Svg_KeepsTheDashPatterns_OfThePngLines()
     {
-        // The column curve draws Euler dashed (10 on, 10 off) and Johnson densely dashed (6, 6); the SVG writer underneath
+        // The column curve draws Euler dashed and Johnson densely dashed: ScottPlot 5.1's LinePattern.Dashed is 10 on, 10 off
+        // and DenselyDashed 6, 6 (read from the package's LinePattern.Intervals); the SVG writer underneath
         // drops such patterns, so the figure writes them as stroke-dasharray itself: on the curve and on its legend line.
         var r = Check.EvaluateWithTrace(Strut(3200), DesignActions.Compression(Force.FromKilonewtons(85)), ResistanceMethods.Johnson);
         var fig = ColumnCurvePlot.Create(r, 900, 600);

@@ -36,7 +36,8 @@ public class OneLineTextTests
             Thread.CurrentThread.CurrentCulture = new CultureInfo(culture);
             var r = Tube(100);
             string text = r.ToString();
-            // The numbers as the result holds them, to six significant figures with a point (π²EI/L² = 228.2 kN for this tube).
+            // The numbers as the result holds them, to six significant figures with a point. For this tube π²EI/L² = 228.2 kN
+            // (Hibbeler, Mechanics of Materials, Example 13.1; PublishedSources.Hibbeler), so 100 kN is a utilisation of 0.438.
             string nRd = (r.DesignResistanceN / 1e3).ToString("0.###", CultureInfo.InvariantCulture);
             Assert.StartsWith("tube T1: utilisation 0.43", text);
             Assert.Contains(", passes; NRd = " + nRd[..5], text);

@@ -1,6 +1,7 @@
 using System;
 using System.Collections.Generic;
 using System.Runtime.CompilerServices;
+using CompressionMembers.Actions;
 using CompressionMembers.Internal;
 using CompressionMembers.Materials.Timber;
 using CompressionMembers.Members;
@@ -351,7 +352,7 @@ public sealed class Ec5ColumnStability : IResistanceMethod
         if (_kmod is { } k)
             trace.Add("kmod", "modification factor (user value)", TimberRules.Input, k, StepUnit.None, "user value replacing EN 1995-1-1 Table 3.1");
         else
-            trace.Add("kmod", "modification factor", $"Table 3.1: {TimberRules.ProductText(mat.Product)}, {TimberRules.ServiceClassText(ServiceClass)}, {TimberRules.DurationText(actions.LoadDuration)} action", i.Kmod, StepUnit.None, En1995Factors.KmodRef);
+            trace.Add("kmod", "modification factor", $"Table 3.1: {TimberRules.ProductText(mat.Product)}, {TimberRules.ServiceClassText(ServiceClass)}, {DesignActions.DurationText(actions.LoadDuration)} action", i.Kmod, StepUnit.None, En1995Factors.KmodRef);
         if (_gammaM is { } g)
             trace.Add("γM", "partial factor for material (national-annex or user value)", TimberRules.Input, g, StepUnit.None, "user value replacing EN 1995-1-1 Table 2.3");
         else

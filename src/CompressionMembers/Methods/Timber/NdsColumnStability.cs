@@ -432,10 +432,10 @@ public sealed class NdsColumnStability : IResistanceMethod
         trace.Add("Emin", "reference modulus for beam and column stability", TimberRules.Input, eminRef, StepUnit.Stress, src);
         TraceCommon.SectionAndLengths(trace, member);
         if (asd)
-            trace.Add("CD", "load duration factor", _cd is null ? $"{TimberRules.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", cd, StepUnit.None, "NDS 2018 2.3.2, Table 2.3.2");
+            trace.Add("CD", "load duration factor", _cd is null ? $"{DesignActions.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", cd, StepUnit.None, "NDS 2018 2.3.2, Table 2.3.2");
         else
         {
-            trace.Add("λ", "time effect factor", _lambda is null ? $"{TimberRules.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", lam, StepUnit.None, "NDS 2018 N.3.3, Table N3");
+            trace.Add("λ", "time effect factor", _lambda is null ? $"{DesignActions.DurationText(actions.LoadDuration)} action (common-practice mapping)" : "user value", lam, StepUnit.None, "NDS 2018 N.3.3, Table N3");
             trace.Add("KF", "format conversion factor for Fc", "2.40", kfC, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");
             trace.Add("φc", "resistance factor for compression", "0.90", phiC, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.2");
             trace.Add("KF", "format conversion factor for Emin", "1.76", kfE, StepUnit.None, "NDS 2018 Table 4.3.1, N.3.1");

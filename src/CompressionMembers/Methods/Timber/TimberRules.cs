@@ -98,7 +98,6 @@ internal static class TimberRules
         }
     }
 
-    internal static string DurationText(LoadDurationClass d) => DesignActions.DurationText(d);
 
     internal static string ServiceClassText(ServiceClass s) => s switch
     {
