@@ -11,8 +11,10 @@ namespace CompressionMembers.Benchmarks;
 /// them to an out struct, read back by the caller), as the typed path hands a method's numbers to <c>Check</c>. At this
 /// machine's usual speed the second took 1.05–1.1 times the first; in what docs/performance.md calls the slow mode
 /// (a state of the host, not of the code: it comes and goes within one process, with the same machine code and data)
-/// it took 1.3–1.45 times (measured 2026-12-02), while the arithmetic loop keeps its time. Not a test; CI's dry
-/// benchmark run prints it once.
+/// it took 1.3–1.45 times (measured 2026-12-02 on an AMD EPYC host), while the arithmetic loop keeps its time. The level
+/// depends on the processor: on an Intel Xeon host (2026-12-03) the probe read 1.3–1.5 at its best and 2.0–2.3 in the
+/// slow mode, so <see cref="SlowModeRatio"/> marks every round there; <see cref="PlainTicks"/> reads the probe against
+/// its best level in its own run instead. Not a test; CI's dry benchmark run prints it once.
 /// </summary>
 internal static class MachineProbe
 {
@@ -25,7 +27,8 @@ internal static class MachineProbe
         for (int i = 0; i < N; i++) { Xs[i] = 1 + rnd.NextDouble(); Ys[i] = 2 + rnd.NextDouble(); }
     }
 
-    /// <summary>Above this ratio (round trip ÷ arithmetic) a round is marked as run in the slow mode.</summary>
+    /// <summary>Above this ratio (round trip ÷ arithmetic) a round is marked as run in the slow mode (set on the AMD host;
+    /// see the class remarks for other processors).</summary>
     public const double SlowModeRatio = 1.2;
 
     private static double s_sink;   // keeps the loops' results alive

@@ -70,7 +70,7 @@ internal static class PlainLoop
         return 0;
     }
 
-    private static MethodInfo Method(string name) =>
+    internal static MethodInfo Method(string name) =>
         typeof(MethodBenchmarks).GetMethod(name) ?? throw new ArgumentException($"No benchmark method {name} in MethodBenchmarks.");
 
     // Calls per round so that a round of the typed side takes about RoundSeconds (after a warm-up that lets the runtime
@@ -85,7 +85,7 @@ internal static class PlainLoop
     }
 
     // Seconds per call (one call checks every member of the benchmark once).
-    private static double Time(Func<double> f, int calls, ref double sink)
+    internal static double Time(Func<double> f, int calls, ref double sink)
     {
         var sw = Stopwatch.StartNew();
         for (int i = 0; i < calls; i++) sink += f();

@@ -9,5 +9,9 @@ if (args.Length > 0 && args[0] == "--plain-loop")
 //      dotnet run -c Release --project benchmarks/CompressionMembers.Benchmarks -- --plain-batch --rounds 9
 if (args.Length > 0 && args[0] == "--plain-batch")
     return CompressionMembers.Benchmarks.PlainBatch.Run(args[1..]);
+// Both of the machine's speeds in one long-running process, tick by tick (PlainTicks.cs):
+//      dotnet run -c Release --project benchmarks/CompressionMembers.Benchmarks -- --plain-ticks --minutes 20
+if (args.Length > 0 && args[0] == "--plain-ticks")
+    return CompressionMembers.Benchmarks.PlainTicks.Run(args[1..]);
 BenchmarkSwitcher.FromAssembly(typeof(CompressionMembers.Benchmarks.MethodBenchmarks).Assembly).Run(args);
 return 0;
