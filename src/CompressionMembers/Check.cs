@@ -113,7 +113,8 @@ public static class Check
                 break;
             case NdsColumnStability m: verdict = default; check = trace is null ? m.ApplicableNumbers(rm, ra, ref numbers) : null; break;
             case Eurocode9Compression m:
-                check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;
+                if (trace is null) check = m.ApplicableNumbers(rm, ra, ref numbers, out verdict);   // the classification looked up once
+                else check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? m.Numbers(rm, ra, trace, ref numbers) : null;
                 break;
             case BucklingConstantMethod m:
                 check = (verdict = m.AppliesTo(rm, ra)).IsApplicable ? trace is null ? m.UntracedNumbers(rm, ra, ref numbers) : m.Numbers(rm, ra, trace, ref numbers) : null;

@@ -122,13 +122,18 @@ public sealed class Eurocode9Compression : IResistanceMethod
     internal static bool IsOpenForTorsion(SectionKind k) => k is SectionKind.Angle or SectionKind.Tee or SectionKind.Channel or SectionKind.DoublySymmetricI;
 
     /// <inheritdoc/>
-    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions)
+    public Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions) => AppliesTo(member, actions, out _);
+
+    /// <summary><see cref="AppliesTo(in ResolvedMember, in ResolvedActions)"/>, with the classification entry it read (null
+    /// when it refused before reading one), so that <see cref="ApplicableNumbers"/> looks it up once per check.</summary>
+    private Applicability AppliesTo(in ResolvedMember member, in ResolvedActions actions, out Ec9SectionEntry? found)
     {
+        found = null;
         if (member.Material is not AluminiumAlloy alloy) return NotAluminium(member);
         var section = member.Section;
         if (!Ec9Section.Supports(member.SectionKind)) return NoFlatParts(section);
         bool welded = Welding.Location == WeldLocation.Longitudinal;
-        var entry = Ec9ClassificationCache.Get(section, alloy, welded);   // classified once per section, alloy and welding
+        var entry = found = Ec9ClassificationCache.Get(section, alloy, welded);   // classified once per section, alloy and welding
         ref readonly var c = ref entry.Result;
         if (!entry.ThicknessCovered) return ThicknessNotCovered(c, alloy);
         if (IsOpenForTorsion(member.SectionKind) && !member.HasTorsionalProperties)
@@ -185,14 +190,22 @@ public sealed class Eurocode9Compression : IResistanceMethod
     /// (then <see cref="EvaluateGeneral"/>). The method's own <see cref="Evaluate"/> and Check's traced checks take it.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal string? Numbers(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers) =>
-        IsFlexuralOnly(member, actions) ? FlexuralNumbers<MethodEntry>(member, actions, trace, ref numbers) : null;
+        IsFlexuralOnly(member, actions)
+            ? FlexuralNumbers<MethodEntry>(member, actions, Ec9ClassificationCache.Get(member.Section, (AluminiumAlloy)member.Material, false), trace, ref numbers)
+            : null;
 
-    /// <summary>Check's entry for an untraced check of a member the method applies to: the straight-line path's numbers,
-    /// or null for welds, open sections, bending and numbers a result refuses (then <see cref="EvaluateGeneral"/>, which
-    /// computes the same and throws for those).</summary>
+    /// <summary>Check's entry for an untraced check: the applicability test (<paramref name="verdict"/> is what
+    /// <see cref="AppliesTo(in ResolvedMember, in ResolvedActions)"/> returns), then, for a member the method applies to,
+    /// the straight-line path's numbers, or null for welds, open sections, bending and numbers a result refuses (then
+    /// <see cref="EvaluateGeneral"/>, which computes the same and throws for those). The classification entry the test
+    /// read is handed to the kernel, instead of being looked up a second time (docs/performance.md, twelfth round).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    internal string? UntracedNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers) =>
-        IsFlexuralOnly(member, actions) ? FlexuralNumbers<CheckEntry>(member, actions, null, ref numbers) : null;
+    internal string? ApplicableNumbers(in ResolvedMember member, in ResolvedActions actions, ref CheckNumbers numbers, out Applicability verdict)
+    {
+        verdict = AppliesTo(member, actions, out Ec9SectionEntry? entry);
+        // An applicable verdict has read the entry; without welds (IsFlexuralOnly) it is the unwelded one the path needs.
+        return verdict.IsApplicable && IsFlexuralOnly(member, actions) ? FlexuralNumbers<CheckEntry>(member, actions, entry!, null, ref numbers) : null;
+    }
 
     /// <summary>The straight-line path's numbers; returns the governing check's words.</summary>
     // An unwelded closed or solid section in compression: flexural buckling about both axes only (6.3.1.1, 6.3.1.2), straight
@@ -201,12 +214,12 @@ public sealed class Eurocode9Compression : IResistanceMethod
     // (KernelEntry): for Check's untraced entry the step-writing branches and the throw fold away, so that no value is
     // live across a call (docs/performance.md, fourth round).
     [MethodImpl(MethodImplOptions.NoInlining)]
-    internal string? FlexuralNumbers<TEntry>(in ResolvedMember member, in ResolvedActions actions, CalculationTrace? trace, ref CheckNumbers numbers)
+    internal string? FlexuralNumbers<TEntry>(in ResolvedMember member, in ResolvedActions actions, Ec9SectionEntry entry, CalculationTrace? trace,
+        ref CheckNumbers numbers)
         where TEntry : struct
     {
         bool traced = typeof(TEntry) == typeof(MethodEntry) && trace is not null;
-        var alloy = (AluminiumAlloy)member.Material;
-        var entry = Ec9ClassificationCache.Get(member.Section, alloy, false);
+        var alloy = entry.Alloy;   // the member's alloy: the entry was looked up for it, unwelded
         ref readonly var c = ref entry.Result;
         double f0 = member.StrengthPa, aEff = c.AreaEffM2, gm1 = PartialFactorM1;
         var cls = alloy.BucklingClass;
