@@ -33,11 +33,13 @@ internal static class PlainLoop
             else if (args[i] == "--child") child = true;
             else names.Add(args[i]);
         }
-        if (names.Count == 0)
-            names.AddRange(typeof(MethodBenchmarks).GetMethods().Where(m => m.Name.EndsWith("RawLoop", StringComparison.Ordinal))
-                .Select(m => m.Name[..^"RawLoop".Length]));
+        if (names.Count == 0) names.AddRange(AllMethodNames());
         return child ? Child(names) : Parent(names, processes);
     }
+
+    /// <summary>Every method <see cref="MethodBenchmarks"/> times: its benchmark names without <c>RawLoop</c>.</summary>
+    internal static IEnumerable<string> AllMethodNames() =>
+        typeof(MethodBenchmarks).GetMethods().Where(m => m.Name.EndsWith("RawLoop", StringComparison.Ordinal)).Select(m => m.Name[..^"RawLoop".Length]);
 
     // One process: set up once, then for each method alternate typed and raw rounds and print the medians.
     private static int Child(List<string> names)

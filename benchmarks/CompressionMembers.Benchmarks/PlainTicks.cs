@@ -45,9 +45,7 @@ internal static class PlainTicks
             else if (args[i] == "--log" && i + 1 < args.Length) log = args[++i];
             else names.Add(args[i]);
         }
-        if (names.Count == 0)
-            names.AddRange(typeof(MethodBenchmarks).GetMethods().Where(m => m.Name.EndsWith("RawLoop", StringComparison.Ordinal))
-                .Select(m => m.Name[..^"RawLoop".Length]));
+        if (names.Count == 0) names.AddRange(PlainLoop.AllMethodNames());
 
         var bench = new MethodBenchmarks();
         bench.Setup();
