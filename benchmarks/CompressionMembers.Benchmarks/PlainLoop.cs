@@ -75,15 +75,15 @@ internal static class PlainLoop
     internal static MethodInfo Method(string name) =>
         typeof(MethodBenchmarks).GetMethod(name) ?? throw new ArgumentException($"No benchmark method {name} in MethodBenchmarks.");
 
-    // Calls per round so that a round of the typed side takes about RoundSeconds (after a warm-up that lets the runtime
+    // Calls per round so that a round of the typed side takes about roundSeconds (after a warm-up that lets the runtime
     // reach its optimised code).
-    private static int Calibrate(Func<double> f)
+    internal static int Calibrate(Func<double> f, double warmUpSeconds = 1.0, double roundSeconds = RoundSeconds)
     {
         double sink = 0;
         var sw = Stopwatch.StartNew();
         int n = 0;
-        while (sw.Elapsed.TotalSeconds < 1.0) { sink += f(); n++; }
-        return Math.Max(1, (int)(n * RoundSeconds / sw.Elapsed.TotalSeconds) + (sink == 0.5 ? 1 : 0));
+        while (sw.Elapsed.TotalSeconds < warmUpSeconds) { sink += f(); n++; }
+        return Math.Max(1, (int)(n * roundSeconds / sw.Elapsed.TotalSeconds) + (sink == 0.5 ? 1 : 0));
     }
 
     // Seconds per call (one call checks every member of the benchmark once).

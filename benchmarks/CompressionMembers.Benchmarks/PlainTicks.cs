@@ -52,7 +52,7 @@ internal static class PlainTicks
         var pairs = names.Select(n => (Name: n,
             Typed: PlainLoop.Method(n + "Typed").CreateDelegate<Func<double>>(bench),
             Raw: PlainLoop.Method(n + "RawLoop").CreateDelegate<Func<double>>(bench))).ToArray();
-        var calls = pairs.Select(p => Calibrate(p.Typed)).ToArray();
+        var calls = pairs.Select(p => PlainLoop.Calibrate(p.Typed, warmUpSeconds: 0.5, roundSeconds: RoundSeconds)).ToArray();
 
         Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"Plain ticks: {pairs.Length} methods in turn for {minutes:F0} min in one process; a tick is one method, a typed and a raw round of about {RoundSeconds:F1} s between two machine probes."));
@@ -116,14 +116,5 @@ internal static class PlainTicks
     {
         var a = xs.OrderBy(x => x).ToArray();
         return a.Length == 0 ? double.NaN : a[(int)Math.Round(q * (a.Length - 1))];
-    }
-
-    private static int Calibrate(Func<double> f)
-    {
-        double sink = 0;
-        var sw = Stopwatch.StartNew();
-        int n = 0;
-        while (sw.Elapsed.TotalSeconds < 0.5) { sink += f(); n++; }
-        return Math.Max(1, (int)(n * RoundSeconds / sw.Elapsed.TotalSeconds) + (sink == 0.5 ? 1 : 0));
     }
 }
