@@ -28,6 +28,37 @@ public class Ec5FireReducedSectionTests
         Near.Relative(kc * 27.6e6 * 0.102 * 0.102, r.DesignResistanceN, 1e-12, "hand calculation, EN 1995-1-2 4.2.2 with EN 1995-1-1 6.3.2");
         Near.Relative(lr, r.AboutY.RelativeSlenderness, 1e-12, "hand calculation of (6.21) on the residual section");
         Near.Relative(50e3 / (kc * 27.6e6 * 0.102 * 0.102), r.Utilisation, 1e-12, "NEd,fi / Nc,Rd,fi");
+        // Elastic critical force of the residual section with the 20 % fractile modulus kfi E0,05 (EN 1995-1-2 2.3 (2.1)):
+        // Euler's π² E I / Lef² (Timoshenko & Gere §2.2) with I = 102⁴ / 12 mm⁴.
+        Near.Relative(Math.PI * Math.PI * 1.15 * 9600e6 * (Math.Pow(0.102, 4) / 12) / (3.0 * 3.0), r.AboutY.CriticalForceN, 1e-12,
+            "π² kfi E0,05 Iy,fi / Lef², hand calculation");
+    }
+
+    [Fact]
+    public void CriticalForce_AnyRectangle_IsEulersPiSquaredEIOverLefSquared()
+    {
+        // Ncr = π² E I / Lef² (Euler; Timoshenko & Gere §2.2). The method forms π² E A / λ² with λ = Lef √12 / h — the same
+        // quantity, as λ² = Lef² A / I for any section — in one division instead of two. The two forms must agree to
+        // rounding (a few ulp).
+        Gen.Select(Gen.Double[0.005, 2.0], Gen.Double[0.005, 2.0], Gen.Double[0.1, 30.0], Gen.Double[1e9, 2e10]).Sample((b, h, lef, e) =>
+        {
+            double expected = Math.PI * Math.PI * e * (b * h * h * h / 12) / (lef * lef);
+            double actual = Ec5FireReducedSection.CriticalForce(e, b * h, Ec5FireReducedSection.ResidualSlenderness(lef, h));
+            return Math.Abs(actual - expected) <= 1e-14 * expected;
+        }, seed: Trust.PropertyTests.Seed);
+    }
+
+    [Fact]
+    public void RelativeSlenderness_EveryGrade_IsLambdaOverPiTimesTheRootOfFcOverE()
+    {
+        // λrel = λ / π √(fc,0,k / E0,05) (EN 1995-1-1 (6.21), (6.22)); the fire method multiplies λ by the material's
+        // √(fc,0,k / E0,05) / π, formed once. Both orders must agree to rounding for every grade of the library.
+        foreach (var mat in TimberGrades.All)
+            Gen.Double[1, 300].Sample(lam =>
+            {
+                double expected = lam / Math.PI * Math.Sqrt(mat.CompressionStrength.Pascals / mat.FifthPercentileModulus.Pascals);
+                return Math.Abs(lam * mat.SlendernessRootOverPi - expected) <= 1e-15 * expected;
+            }, seed: Trust.PropertyTests.Seed, iter: 200);
     }
 
     [Fact]

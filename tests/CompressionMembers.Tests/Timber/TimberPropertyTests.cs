@@ -28,6 +28,25 @@ public class TimberPropertyTests
     }
 
     [Fact]
+    public void Ec5Compression_UtilisationIsSigmaOverKcFd_WithTheKernelsKc()
+    {
+        // Pure compression, (6.23)/(6.24) without moments: u = σc,0,d / (kc fc,0,d). The compression core forms it as
+        // σc,0,d / fc,0,d × (k + √(k² − λrel²)) — the divisor of kc (6.25), so no division by kc waits on kc — which must
+        // agree with the standard's order to rounding; kc itself must be the same bits as Kc, and the resistance kc,min fc,0,d A.
+        Gen.Select(Gen.Double[0, 5], Gen.Double[0, 5], Gen.Bool, Gen.Double[1e3, 5e7], Gen.Double[5e6, 6e7], Gen.Double[1e-4, 1]).Sample(
+            (ly, lz, glulam, sigma, fd, a) =>
+            {
+                double bc = glulam ? 0.1 : 0.2;
+                Ec5Kernel.Compression(ly, lz, bc, fd, sigma, a, out _, out _, out double kcY, out double kcZ, out double uY, out double uZ, out double nRd);
+                double hY = Ec5Kernel.Kc(ly, bc), hZ = Ec5Kernel.Kc(lz, bc);
+                return kcY.Equals(hY) && kcZ.Equals(hZ) && Close(uY, sigma / (hY * fd)) && Close(uZ, sigma / (hZ * fd))
+                    && nRd.Equals(Math.Min(hY, hZ) * fd * a);
+            }, seed: Trust.PropertyTests.Seed);
+
+        static bool Close(double actual, double expected) => Math.Abs(actual - expected) <= 1e-15 * expected;
+    }
+
+    [Fact]
     public void Cp_IsSmallerRootOfYlinenQuadratic_ByMathNet()
     {
         // Cp of (3.7-1) is the smaller root of c x² − (1 + α) x + α = 0, α = FcE/Fc* (Ylinen's form); MathNet solves it.

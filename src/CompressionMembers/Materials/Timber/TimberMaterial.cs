@@ -44,6 +44,7 @@ public sealed class TimberMaterial : Material
         E0MeanPa = em;
         GMeanPa = gmean.Pascals;
         SlendernessRoot = Math.Sqrt(CompressiveStrengthPa / ElasticModulusPa);
+        SlendernessRootOverPi = SlendernessRoot / Math.PI;
         // EN 1995-1-2 Table 3.1 βn in m/s, a constant of the product and density (NaN where the table does not cover them;
         // the fire method refuses such a material unless it is given a charring rate).
         NotionalCharringRateMs = Methods.Timber.En1995Factors.CharringCoverage(product, rhok.KilogramsPerCubicMeter) is null
@@ -128,6 +129,8 @@ public sealed class TimberMaterial : Material
     internal double GMeanPa { get; }
     /// <summary>√(fc,0,k / E0,05), the material's factor in the relative slenderness of EN 1995-1-1 (6.21, 6.22).</summary>
     internal double SlendernessRoot { get; }
+    /// <summary>√(fc,0,k / E0,05) / π, so that λrel = λ × this (6.21, 6.22) takes one multiplication.</summary>
+    internal double SlendernessRootOverPi { get; }
     /// <summary>βn of EN 1995-1-2 Table 3.1 in m/s, or NaN where the table does not cover the product and density.</summary>
     internal double NotionalCharringRateMs { get; }
     internal double RhokKgM3 { get; }

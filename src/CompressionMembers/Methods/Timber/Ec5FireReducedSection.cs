@@ -205,8 +205,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         }
         i.LambdaY = ResidualSlenderness(i.LefYM, hFi);   // the residual section's radius of gyration
         i.LambdaZ = ResidualSlenderness(i.LefZM, bFi);
-        i.LambdaRelY = i.LambdaY / Math.PI * mat.SlendernessRoot;   // (6.21) on the residual section
-        i.LambdaRelZ = i.LambdaZ / Math.PI * mat.SlendernessRoot;
+        i.LambdaRelY = i.LambdaY * mat.SlendernessRootOverPi;   // (6.21) on the residual section
+        i.LambdaRelZ = i.LambdaZ * mat.SlendernessRootOverPi;
         return true;
     }
 
@@ -217,6 +217,12 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
     /// dependent operations that every fire check waits for.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double ResidualSlenderness(double lefM, double sideM) => lefM * Sqrt12 / sideM;
+
+    /// <summary>Elastic critical force of the residual section with the 20 % fractile modulus, Ncr = π² E20 A / λ² (= π² E20 I / Lef²,
+    /// as λ² = Lef² A / I): one division where π² E I / Lef² with I = b h³ / 12 takes two.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static double CriticalForce(double e20Pa, double areaM2, double slenderness) =>
+        Math.PI * Math.PI * e20Pa * areaM2 / (slenderness * slenderness);
 
     /// <summary>Utilisation at fire time t (+∞ once the section has burnt away).</summary>
     private double UtilisationAt(in ResolvedMember member, in ResolvedActions actions, TimberMaterial mat, double tS)
@@ -281,10 +287,12 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         double def = BetaN(mat) * _tReqS + _k0d0;   // (4.1): def = βn t + k0 d0, with k0 d0 formed once with the method
         Residual(Exposure, b, h, def, out double bFi, out double hFi, out _, out _);
         if (!(bFi > 0) || !(hFi > 0)) return null;
-        double a = bFi * hFi, iy = bFi * hFi * hFi * hFi / 12, iz = hFi * bFi * bFi * bFi / 12;
+        double a = bFi * hFi;
         double lefY = member.EffectiveLengthYM, lefZ = member.EffectiveLengthZM;
         double lamY = ResidualSlenderness(lefY, hFi), lamZ = ResidualSlenderness(lefZ, bFi);   // the residual section's slenderness
-        double lrY = lamY / Math.PI * mat.SlendernessRoot, lrZ = lamZ / Math.PI * mat.SlendernessRoot;   // (6.21), (6.22)
+        // (6.21), (6.22): λ × (√(fc,0,k / E0,05) / π), the material's factor formed once — one multiplication after λ on the
+        // chain every fire check waits for, where λ / π × √(…) put a division there (docs/performance.md, thirteenth round).
+        double lrY = lamY * mat.SlendernessRootOverPi, lrZ = lamZ * mat.SlendernessRootOverPi;
         double kfi = Kfi(mat);
         // EN 1995-1-2 (2.1) with kmod,fi = 1: fd,fi = kfi fk / γM,fi, and the 20 % fractile modulus kfi E0,05 / γM,fi. Division
         // by the recommended γM,fi = 1 is exact (x / 1 = x), so it is skipped: the same bits, two divisions fewer per check.
@@ -301,8 +309,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
         numbers.Utilisation = u;
         numbers.GoverningAxis = aboutY ? BucklingAxis.Y : BucklingAxis.Z;
         numbers.GoverningMode = kcGov >= 1.0 ? FailureMode.Yielding : FailureMode.FlexuralBuckling;
-        numbers.AboutY = new AxisOutcome(lefY, lamY, lrY, Math.PI * Math.PI * e20 * iy / (lefY * lefY), kcY, kcY * fd * a);
-        numbers.AboutZ = new AxisOutcome(lefZ, lamZ, lrZ, Math.PI * Math.PI * e20 * iz / (lefZ * lefZ), kcZ, kcZ * fd * a);
+        numbers.AboutY = new AxisOutcome(lefY, lamY, lrY, CriticalForce(e20, a, lamY), kcY, kcY * fd * a);
+        numbers.AboutZ = new AxisOutcome(lefZ, lamZ, lrZ, CriticalForce(e20, a, lamZ), kcZ, kcZ * fd * a);
         numbers.Torsional = default;
         return aboutY ? CheckCompressionY : CheckCompressionZ;
     }
@@ -343,8 +351,8 @@ public sealed class Ec5FireReducedSection : IResistanceMethod
                 "EN 1995-1-2 4.2.2: no residual cross-section at the required time", default, default, default, trace);
         double e20 = Kfi(mat) * i.E005Pa / FireMaterialFactor;
         return new CheckResult(member, actions, this, o.ResistanceN, o.Utilisation, Ec5Kernel.Axis(o), Ec5Kernel.Mode(o), FireCheckName(o),
-            new AxisOutcome(i.LefYM, o.LambdaY, o.LambdaRelY, Math.PI * Math.PI * e20 * i.IyM4 / (i.LefYM * i.LefYM), o.KcY, o.KcY * o.Fc0dPa * i.AreaM2),
-            new AxisOutcome(i.LefZM, o.LambdaZ, o.LambdaRelZ, Math.PI * Math.PI * e20 * i.IzM4 / (i.LefZM * i.LefZM), o.KcZ, o.KcZ * o.Fc0dPa * i.AreaM2),
+            new AxisOutcome(i.LefYM, o.LambdaY, o.LambdaRelY, CriticalForce(e20, i.AreaM2, o.LambdaY), o.KcY, o.KcY * o.Fc0dPa * i.AreaM2),
+            new AxisOutcome(i.LefZM, o.LambdaZ, o.LambdaRelZ, CriticalForce(e20, i.AreaM2, o.LambdaZ), o.KcZ, o.KcZ * o.Fc0dPa * i.AreaM2),
             o.LtbChecked ? new AxisOutcome(i.LefLtbM, double.NaN, o.LambdaRelM, double.NaN, o.KCrit, double.NaN) : default, trace);
     }
 

@@ -61,21 +61,31 @@ internal static class Ec5Kernel
         lambdaRelM <= 0.75 ? 1.0 : lambdaRelM <= 1.4 ? 1.56 - 0.75 * lambdaRelM : 1 / (lambdaRelM * lambdaRelM);
 
     /// <summary>kc from λrel and the k already computed for it (6.25, 6.26): the same operations as <see cref="Kc"/>.</summary>
-    internal static double KcFromK(double lambdaRel, double k) =>
-        lambdaRel <= 0.3 ? 1.0 : 1 / (k + Math.Sqrt(k * k - lambdaRel * lambdaRel));
+    internal static double KcFromK(double lambdaRel, double k) => 1 / InverseKc(lambdaRel, k);
+
+    /// <summary>1 / kc = k + √(k² − λrel²) (6.25, 6.26), 1 for λrel ≤ 0.3: the divisor of <see cref="KcFromK"/> (1 / 1 = 1
+    /// exactly, so kc is the same bits either way).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static double InverseKc(double lambdaRel, double k) =>
+        lambdaRel <= 0.3 ? 1.0 : k + Math.Sqrt(k * k - lambdaRel * lambdaRel);
 
     /// <summary>The pure compression check on scalars — (6.25)–(6.28) about both axes, then σc,0,d ≤ kc fc,0,d — shared
-    /// by the straight-line compression paths of the column and fire methods; the same operations as <see cref="Run"/>.</summary>
+    /// by the straight-line compression paths of the column and fire methods; the same operations as <see cref="Run"/>.
+    /// The utilisation σc,0,d / (kc fc,0,d) is formed as σc,0,d / fc,0,d × (1 / kc), from the divisor of kc: so the last
+    /// steps of a check's chain of dependent operations are a multiplication, not two divisions after kc's (the utilisation
+    /// agrees with the standard's order to rounding, TimberPropertyTests; kc and the resistance are unchanged).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static void Compression(double lrY, double lrZ, double betaC, double fc0dPa, double sigmaCPa, double areaM2,
         out double kY, out double kZ, out double kcY, out double kcZ, out double uY, out double uZ, out double resistanceN)
     {
         kY = K(lrY, betaC);
         kZ = K(lrZ, betaC);
-        kcY = KcFromK(lrY, kY);
-        kcZ = KcFromK(lrZ, kZ);
-        uY = sigmaCPa / (kcY * fc0dPa);
-        uZ = sigmaCPa / (kcZ * fc0dPa);
+        double rY = InverseKc(lrY, kY), rZ = InverseKc(lrZ, kZ);
+        kcY = 1 / rY;
+        kcZ = 1 / rZ;
+        double s = sigmaCPa / fc0dPa;
+        uY = s * rY;
+        uZ = s * rZ;
         resistanceN = Math.Min(kcY, kcZ) * fc0dPa * areaM2;
     }
 
@@ -98,9 +108,11 @@ internal static class Ec5Kernel
 
         if (!o.Bending)
         {
-            // Pure compression: σc,0,d ≤ kc fc,0,d, linear in the load ((6.2) with kc = 1 in the stocky range).
-            o.UY = o.SigmaCPa / (o.KcY * o.Fc0dPa);
-            o.UZ = o.SigmaCPa / (o.KcZ * o.Fc0dPa);
+            // Pure compression: σc,0,d ≤ kc fc,0,d, linear in the load ((6.2) with kc = 1 in the stocky range); formed as in
+            // Compression, σc,0,d / fc,0,d × (1 / kc).
+            double s = o.SigmaCPa / o.Fc0dPa;
+            o.UY = s * InverseKc(o.LambdaRelY, o.KY);
+            o.UZ = s * InverseKc(o.LambdaRelZ, o.KZ);
             o.Governs = o.UY >= o.UZ ? Governing.AboutY : Governing.AboutZ;
             o.Utilisation = Math.Max(o.UY, o.UZ);
         }
