@@ -52,19 +52,15 @@ internal static class Ec5Kernel
     internal static double Kc(double lambdaRel, double betaC)
     {
         if (lambdaRel <= 0.3) return 1.0;
-        double k = K(lambdaRel, betaC);
-        return 1 / (k + Math.Sqrt(k * k - lambdaRel * lambdaRel));
+        return 1 / InverseKc(lambdaRel, K(lambdaRel, betaC));
     }
 
     /// <summary>kcrit of (6.34) from λrel,m.</summary>
     internal static double KCrit(double lambdaRelM) =>
         lambdaRelM <= 0.75 ? 1.0 : lambdaRelM <= 1.4 ? 1.56 - 0.75 * lambdaRelM : 1 / (lambdaRelM * lambdaRelM);
 
-    /// <summary>kc from λrel and the k already computed for it (6.25, 6.26): the same operations as <see cref="Kc"/>.</summary>
-    internal static double KcFromK(double lambdaRel, double k) => 1 / InverseKc(lambdaRel, k);
-
-    /// <summary>1 / kc = k + √(k² − λrel²) (6.25, 6.26), 1 for λrel ≤ 0.3: the divisor of <see cref="KcFromK"/> (1 / 1 = 1
-    /// exactly, so kc is the same bits either way).</summary>
+    /// <summary>1 / kc = k + √(k² − λrel²) (6.25, 6.26) from λrel and the k already computed for it, 1 for λrel ≤ 0.3: the
+    /// divisor of <see cref="Kc"/> (1 / 1 = 1 exactly, so 1 / this is kc to the bit either way).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static double InverseKc(double lambdaRel, double k) =>
         lambdaRel <= 0.3 ? 1.0 : k + Math.Sqrt(k * k - lambdaRel * lambdaRel);
@@ -98,8 +94,9 @@ internal static class Ec5Kernel
         o.LambdaRelZ = i.LambdaRelZ;                                 // (6.22)
         o.KY = K(o.LambdaRelY, i.BetaC);
         o.KZ = K(o.LambdaRelZ, i.BetaC);
-        o.KcY = KcFromK(o.LambdaRelY, o.KY);
-        o.KcZ = KcFromK(o.LambdaRelZ, o.KZ);
+        double rY = InverseKc(o.LambdaRelY, o.KY), rZ = InverseKc(o.LambdaRelZ, o.KZ);   // 1 / kc, kept for the utilisation
+        o.KcY = 1 / rY;                                              // (6.25), as Kc
+        o.KcZ = 1 / rZ;                                              // (6.26)
 
         o.Fc0dPa = i.Kmod * i.Fc0kPa / i.GammaM;                       // 2.4.1 (2.14)
         o.SigmaCPa = i.NEdN / i.AreaM2;
@@ -111,8 +108,8 @@ internal static class Ec5Kernel
             // Pure compression: σc,0,d ≤ kc fc,0,d, linear in the load ((6.2) with kc = 1 in the stocky range); formed as in
             // Compression, σc,0,d / fc,0,d × (1 / kc).
             double s = o.SigmaCPa / o.Fc0dPa;
-            o.UY = s * InverseKc(o.LambdaRelY, o.KY);
-            o.UZ = s * InverseKc(o.LambdaRelZ, o.KZ);
+            o.UY = s * rY;
+            o.UZ = s * rZ;
             o.Governs = o.UY >= o.UZ ? Governing.AboutY : Governing.AboutZ;
             o.Utilisation = Math.Max(o.UY, o.UZ);
         }
